@@ -40,7 +40,7 @@ export async function seedDatabase(db: Db, now: Date = new Date()): Promise<void
  * insulation). Left empty until the calc material keys exist; use fixed ids
  * (`seedId`) and `onConflictDoNothing()` like the rows above.
  */
-export async function seedDemoAssessment(_tx: SeedTx, _demo: DemoRefs): Promise<void> {}
+export const seedDemoAssessment: (tx: SeedTx, demo: DemoRefs) => Promise<void> = async () => {};
 
 if (isMainModule(import.meta.url)) {
   (async () => {

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { companies, users } from "@/db/schema";
 import { createTestDb, type TestDb } from "../support/test-db";
-import { sqlErrorOf } from "./sql-error";
+import { sqlErrorOf } from "./helpers";
 
 let t: TestDb;
 beforeAll(async () => {

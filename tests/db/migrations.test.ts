@@ -1,17 +1,10 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { getTableName, is } from "drizzle-orm";
-import { SQLiteTable } from "drizzle-orm/sqlite-core";
 import { afterEach, describe, expect, it } from "vitest";
 import { createDb } from "@/db";
 import { migrateDatabase, migrationsFolder } from "@/db/migrate";
-import * as schema from "@/db/schema";
-
-const schemaTables = Object.values(schema)
-  .filter((value) => is(value, SQLiteTable))
-  .map((table) => getTableName(table as SQLiteTable))
-  .sort();
+import { schemaTableNames as schemaTables } from "./helpers";
 
 let dirs: string[] = [];
 afterEach(() => {
