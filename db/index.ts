@@ -39,18 +39,19 @@ export function createDb(url: string = databaseUrl(), authToken?: string): Db {
   return drizzle({ client, schema }) as Db;
 }
 
-let cached: Db | undefined;
+// On globalThis so that `next dev`, which re-evaluates modules on edits, keeps one client per process.
+const holder = globalThis as typeof globalThis & { __warmsteadDb?: Db };
 
 /** The process-wide database, created on first use. */
 export function getDb(): Db {
-  cached ??= createDb(databaseUrl(), process.env.DATABASE_AUTH_TOKEN || undefined);
-  return cached;
+  holder.__warmsteadDb ??= createDb(databaseUrl(), process.env.DATABASE_AUTH_TOKEN || undefined);
+  return holder.__warmsteadDb;
 }
 
 /** Closes the process-wide database (scripts call it before exiting). */
 export function closeDb(): void {
-  cached?.$client.close();
-  cached = undefined;
+  holder.__warmsteadDb?.$client.close();
+  holder.__warmsteadDb = undefined;
 }
 
 async function prepareFile(client: Client, url: string): Promise<void> {

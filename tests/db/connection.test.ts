@@ -23,6 +23,23 @@ describe("db/index", () => {
     }
   });
 
+  it("getDb() opens DATABASE_URL once per process until closeDb()", async () => {
+    const { closeDb, getDb } = await import("@/db");
+    const saved = process.env.DATABASE_URL;
+    process.env.DATABASE_URL = t.url;
+    try {
+      const db = getDb();
+      expect(getDb()).toBe(db);
+      expect(typeof (await db.$count(companies))).toBe("number");
+      closeDb();
+      expect(getDb()).not.toBe(db);
+    } finally {
+      closeDb();
+      if (saved === undefined) delete process.env.DATABASE_URL;
+      else process.env.DATABASE_URL = saved;
+    }
+  });
+
   it("reads file paths out of file: URLs", async () => {
     const { sqliteFilePath } = await import("@/db");
     expect(sqliteFilePath("file:./data/warmstead.db")).toBe("./data/warmstead.db");
