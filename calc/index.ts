@@ -1,0 +1,24 @@
+// Warmstead calculation engine: pure functions of plain data (see README.md).
+export { analyzeHouse, analyzePrepared, type HouseAnalysis, type HouseEvaluation } from "./analyze";
+export { houseInputSchema, assemblySchema, surfaceSchema, upgradeSchema, climateSchema, type HouseInput, type HouseInputParsed, type UpgradeInput } from "./schema";
+export { validateHouseInput, prepareHouseInput, type Prepared, type ValidationResult } from "./validate";
+export { softWarnings, softWarningsParsed } from "./warnings";
+export { CalcInputError, type InputIssue } from "./errors";
+export { demoHouseInput } from "./demo";
+export { materials, getMaterial, layerRValueIP, windowsAndDoors, getWindowOrDoor, type Material, type MaterialCategory, type WindowOrDoor } from "./materials";
+export { computeAssembly, defaultFramingFraction, memberDepthIn, DEFAULT_METHOD, FRAMING_FRACTION, MEMBER_DEPTH_IN, type AssemblyDef, type AssemblyLayer, type AssemblyResult, type Construction, type FramedLayerSpec, type SurfaceKind, type UMethod } from "./assemblies";
+export { builtInAssemblies } from "./built-in-assemblies";
+export { computeEnvelope, computeSurface, designHeatLoad, AIR_BTUH_PER_CFM_F, type SurfaceDef, type OpeningDef, type Orientation, type EnvelopeResult, type DesignLoad } from "./envelope";
+export { ach50, effectiveLeakageArea, nFactor, basicCoefficients, basicModelCfm, computeInfiltration, csIP, cwIP, type InfiltrationOptions, type InfiltrationResult, type Shielding, type ShelterClass } from "./infiltration";
+export { annualHeating, seasonalEfficiency, FUELS, DEFAULT_GRID_LB_PER_KWH, type Fuel, type Efficiency, type AnnualHeating } from "./energy";
+export { stations, stationTable, findStation, resolveClimate, climateFromEpw, type Station, type ClimateInput, type ResolvedClimate } from "./climate/stations";
+export { parseEpw, degreeDaysC, degreeDaysF, dailyMeansC, heatingDesignDryBulbC, EpwParseError, type EpwData, type EpwLocation, type DegreeDays } from "./epw";
+export { upv, upvEscalated, simplePayback, savingsToInvestment, MEASURE_LIFE_YEARS } from "./economics";
+export { applyUpgrade, nominalInsulationR, type HouseState } from "./upgrades";
+export { densePackEstimate, DEFAULT_DENSITY_LB_FT3, DEFAULT_BAG_WEIGHT_LB, type DensePackEstimate, type DensePackInput } from "./dense-pack";
+export { checkWall, DEFAULT_HIGH_RATIO, DEFAULT_LOW_RATIO, type CrewCheck, type CrewStatus } from "./crew-check";
+export { moistureScreen, indoorDewPointF, type MoistureScreen } from "./moisture";
+export { ventilation62_2, DEFAULT_WSF, type VentilationResult } from "./ventilation";
+export { cautionsFor, type Caution, type HouseFacts } from "./cautions";
+export { toSI, convert, cToF, fToC } from "./units";
+export { METHOD_NOTES } from "./method-notes";

@@ -1,0 +1,111 @@
+// The input schema of analyzeHouse, shared with the API. Every number is bounded:
+// NaN, infinities, negative areas, fractions outside 0–1, zero volumes and absurd
+// magnitudes are refused with the field's path.
+import { z } from "zod";
+
+const NUM = { error: (iss: { input?: unknown }) => (iss.input === undefined ? "is required" : "must be a finite number") };
+const num = () => z.number(NUM);
+const pos = (max: number) => num().gt(0, { error: "must be greater than 0" }).max(max, { error: `must be at most ${max.toLocaleString("en-US")}` });
+const nonneg = (max: number) => num().min(0, { error: "must not be negative" }).max(max, { error: `must be at most ${max.toLocaleString("en-US")}` });
+const frac = () => num().min(0, { error: "must be between 0 and 1" }).max(1, { error: "must be between 0 and 1" });
+const range = (min: number, max: number) => num().min(min, { error: `must be between ${min} and ${max}` }).max(max, { error: `must be between ${min} and ${max}` });
+const int = (min: number, max: number) => range(min, max).int({ error: "must be a whole number" });
+const text = (max = 200) => z.string().min(1, { error: "must not be empty" }).max(max, { error: `must be at most ${max} characters` });
+const life = () => int(1, 100).optional();
+
+export const surfaceKindSchema = z.enum(["wall", "ceiling", "floor"]);
+const presence = z.enum(["present", "absent", "unknown"]);
+
+const continuousLayerSchema = z.strictObject({ materialKey: text(100), thicknessIn: pos(48).optional(), rValueIP: pos(200).optional() });
+const framedLayerSchema = z.strictObject({
+  framed: z.strictObject({
+    member: z.enum(["2x3", "2x4", "2x6", "2x8", "2x10", "2x12", "rough-2x4", "1x2-furring", "custom"]),
+    depthIn: pos(24).optional(), spacingIn: range(8, 48).optional(), framingFraction: frac().optional(),
+    framingMaterial: z.enum(["wood", "steel"]).optional(), cavityFill: text(100).nullable(),
+    fillFraction: frac().optional(), fillRValueIP: pos(100).optional(),
+  }),
+});
+export const assemblySchema = z.object({
+  key: text(100), name: text(), kind: surfaceKindSchema,
+  construction: z.enum(["wood-frame", "steel-frame", "masonry"]),
+  method: z.enum(["parallel-path", "isothermal-planes"]).optional(),
+  layers: z.array(z.union([framedLayerSchema, continuousLayerSchema])).min(1).max(30),
+});
+
+const openingSchema = z.object({
+  kind: z.enum(["window", "door"]), areaFt2: pos(2_000), count: int(1, 200).optional(),
+  productKey: text(100).optional(), uFactorIP: pos(2).optional(), label: text().optional(),
+});
+export const surfaceSchema = z.object({
+  id: text(100), name: text(), kind: surfaceKindSchema,
+  orientation: z.enum(["N", "NE", "E", "SE", "S", "SW", "W", "NW", "horizontal"]),
+  grossAreaFt2: pos(20_000), assemblyKey: text(100), heightFt: pos(100).optional(),
+  openings: z.array(openingSchema).max(100).default([]),
+  bufferFactor: frac().optional(), blockedBayFraction: frac().optional(),
+});
+
+const surfaceIds = z.array(text(100)).min(1).max(1000);
+export const upgradeSchema = z.discriminatedUnion("type", [
+  z.object({ type: z.literal("dense-pack-walls"), name: text().optional(), surfaceIds: z.union([z.literal("all-walls"), surfaceIds]), costUSD: nonneg(1e7), lifeYears: life(), rPerInchIP: pos(10).optional() }),
+  z.object({ type: z.literal("attic-insulation"), name: text().optional(), surfaceIds: z.union([z.literal("all-ceilings"), surfaceIds]).default("all-ceilings"), targetRIP: pos(100), costUSD: nonneg(1e7), lifeYears: life() }),
+  z.object({ type: z.literal("air-sealing"), name: text().optional(), targetCfm50: pos(100_000), costUSD: nonneg(1e7), lifeYears: life() }),
+  z.object({ type: z.literal("windows"), name: text().optional(), surfaceIds: z.union([z.literal("all"), surfaceIds]).default("all"), uFactorIP: pos(2), costUSD: nonneg(1e7), lifeYears: life() }),
+]);
+
+export const climateSchema = z.discriminatedUnion("source", [
+  z.object({ source: z.literal("station"), wmo: z.string().regex(/^\d{5,6}$/, { error: "must be a 5- or 6-digit WMO number" }) }),
+  z.object({ source: z.literal("manual"), hdd65: nonneg(20_000), heatingDesignTempF: range(-80, 80), cdd65: nonneg(10_000).optional(), sourceText: text(500) }),
+  z.object({ source: z.literal("epw"), name: text(), hdd65: nonneg(20_000), cdd65: nonneg(10_000), heatingDesign996F: range(-80, 80), heatingDesign99F: range(-80, 80), sourceText: text(500) }),
+]);
+
+export const houseInputSchema = z.object({
+  name: text().optional(),
+  yearBuilt: int(1600, 2100),
+  stories: range(1, 4),
+  floorAreaFt2: pos(100_000),
+  volumeFt3: pos(2_000_000),
+  bedrooms: int(0, 30),
+  storeyHeightFt: pos(30).optional(),
+  ventilationHeightFt: pos(100).optional(),
+  indoorTempF: range(50, 90).default(70),
+  indoorRH: range(0.05, 0.95).default(0.4),
+  climate: climateSchema,
+  designPercentile: z.enum(["99.6", "99"]).default("99"),
+  heating: z.object({
+    fuel: z.enum(["natural-gas", "oil", "propane", "electric-resistance", "heat-pump"]),
+    efficiency: z.discriminatedUnion("kind", [
+      z.object({ kind: z.literal("afue"), value: num().gt(0, { error: "must be greater than 0" }).max(1, { error: "must be at most 1 (write 78 % as 0.78)" }) }),
+      z.object({ kind: z.literal("cop"), value: pos(8) }),
+      z.object({ kind: z.literal("hspf"), value: pos(20) }),
+    ]),
+    pricePerUnitUSD: nonneg(1_000),
+  }),
+  correctionFactor: pos(3).default(1),
+  gridLbPerKWh: nonneg(5).optional(),
+  blowerDoor: z.object({ cfm50TestIn: pos(100_000), cfm50TestOut: pos(100_000).optional() }),
+  infiltration: z.object({
+    method: z.enum(["n-factor", "ashrae-basic"]).default("n-factor"),
+    nFactorZone: z.union([z.literal(1), z.literal(2), z.literal(3), z.literal(4)]).default(2),
+    shielding: z.enum(["well-shielded", "normal", "exposed"]).default("normal"),
+    nFactorOverride: pos(100).optional(),
+    shelterClass: z.union([z.literal(1), z.literal(2), z.literal(3), z.literal(4), z.literal(5)]).default(4),
+    flowExponent: range(0.4, 1).default(0.65),
+    seasonalDeltaTF: nonneg(150).default(30),
+    seasonalWindMph: nonneg(60).default(7),
+    designWindMph: nonneg(100).default(15),
+  }).prefault({}),
+  assemblies: z.array(assemblySchema).max(200).default([]),
+  surfaces: z.array(surfaceSchema).min(1, { error: "needs at least one surface" }).max(1000),
+  upgrades: z.array(upgradeSchema).max(30).default([]),
+  economics: z.object({ discountRate: range(0, 0.3).default(0.03), fuelEscalationRate: range(-0.1, 0.2).default(0) }).prefault({}),
+  densePack: z.object({ densityLbFt3: pos(10).default(3.5), bagWeightLb: pos(100).default(25), highRatio: range(1, 5).default(1.3), lowRatio: range(0.05, 1).default(0.8) }).prefault({}),
+  ventilation: z.object({ wsf: pos(3).default(0.5), balanced: z.boolean().default(false) }).prefault({}),
+  facts: z.object({ knobAndTube: presence.default("unknown"), vermiculite: presence.default("unknown"), combustionAppliances: z.boolean().optional() }).prefault({}),
+  crewLog: z.array(z.object({ surfaceId: text(100), bagsActual: nonneg(10_000) })).max(1000).default([]),
+});
+
+/** What callers send (defaults optional). */
+export type HouseInput = z.input<typeof houseInputSchema>;
+/** After parsing, with every default filled in. */
+export type HouseInputParsed = z.output<typeof houseInputSchema>;
+export type UpgradeInput = z.output<typeof upgradeSchema>;
