@@ -15,10 +15,11 @@ const TARGET_EPW_MEMORY_RATIO = 3;
 
 /** The demo house scaled to 60 surfaces (each demo surface split in ten) with 6 upgrades. */
 export function benchHouse(): HouseInput {
-  const surfaces = demoHouseInput.surfaces.flatMap((s) =>
+  const base: NonNullable<HouseInput["surfaces"]> = demoHouseInput.surfaces;
+  const surfaces = base.flatMap((s) =>
     Array.from({ length: 10 }, (_, k) => ({
       ...s, id: `${s.id}-${k}`, name: `${s.name} ${k + 1}`, grossAreaFt2: s.grossAreaFt2 / 10,
-      openings: ("openings" in s ? s.openings : []).map((o) => ({ ...o, count: 1, areaFt2: (o.areaFt2 * ("count" in o ? o.count ?? 1 : 1)) / 10 })),
+      openings: (s.openings ?? []).map((o) => ({ ...o, count: 1, areaFt2: (o.areaFt2 * (o.count ?? 1)) / 10 })),
     })));
   return {
     ...demoHouseInput, surfaces,
