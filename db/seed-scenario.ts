@@ -194,6 +194,7 @@ const jobSpecs: JobSpec[] = [
     openedDaysAgo: 16,
     lastMovedDaysAgo: 3,
     auditor: "auditor",
+    crew: ["installer"],
     testIn: 3900,
     intakeNotes: "Upstairs bedrooms cold all winter, drafts at the baseboards, high gas bills.",
   },

@@ -6,7 +6,7 @@ import { hash } from "bcryptjs";
 import { closeDb, databaseUrl, getDb, type Db } from "./index";
 import { isMainModule, migrateDatabase } from "./migrate";
 import * as t from "./schema";
-import { buildScenario, demoCompanyId, demoHouseId, demoJobId, demoPassword } from "./seed-scenario";
+import { buildScenario, demoAccounts, demoCompanyId, demoHouseId, demoJobId, demoPassword } from "./seed-scenario";
 
 export { demoAccounts, demoPassword, demoCompanyId, demoJobId, demoHouseId, seedId } from "./seed-scenario";
 
@@ -46,7 +46,8 @@ if (isMainModule(import.meta.url)) {
   (async () => {
     await migrateDatabase(databaseUrl());
     await seedDatabase(getDb());
-    console.log("Seeded Kestrel Bay Home Performance (demo password: warmstead-demo).");
+    console.log("Seeded Kestrel Bay Home Performance. Demo sign-ins (password for all: warmstead-demo):");
+    for (const a of demoAccounts) console.log(`  ${a.role.padEnd(10)} ${a.email.padEnd(32)} ${a.name}`);
   })()
     .catch((error: unknown) => {
       console.error(error);

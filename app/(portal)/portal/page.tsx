@@ -1,0 +1,32 @@
+import type { Metadata } from "next";
+import { StageBadge } from "@/components/jobs/stage-badge";
+import { listHomeownerHouses } from "@/lib/data/portal";
+import { requireHomeownerPage } from "@/lib/session";
+
+export const metadata: Metadata = { title: "My home" };
+
+export default async function PortalPage() {
+  const user = await requireHomeownerPage();
+  const homes = await listHomeownerHouses(user);
+  return (
+    <>
+      <h1 className="text-3xl font-bold text-spruce-900">Welcome, {user.name.split(" ")[0]}</h1>
+      <p className="mt-1 text-ink-muted">Your house, the work planned for it, and the reports your contractor has issued to you.</p>
+      <ul className="mt-6 space-y-4" data-testid="portal-houses">
+        {homes.map((h) => (
+          <li key={h.jobId} className="card">
+            <div className="flex flex-wrap items-center justify-between gap-3">
+              <div>
+                <h2 className="text-xl font-semibold text-spruce-800">{h.street}</h2>
+                <p className="text-ink-muted">{h.city}, {h.state} · built {h.yearBuilt}</p>
+              </div>
+              <StageBadge stage={h.stage} />
+            </div>
+            <p className="mt-3 text-ink-muted">No documents have been issued yet. When your savings report or proposal is ready, it appears here and you receive an e-mail.</p>
+          </li>
+        ))}
+        {homes.length === 0 ? <li className="card text-ink-muted">No house is linked to your account yet.</li> : null}
+      </ul>
+    </>
+  );
+}

@@ -1,0 +1,72 @@
+import NextAuth, { CredentialsSignin } from "next-auth";
+import Credentials from "next-auth/providers/credentials";
+import { getDb } from "@/db";
+import type { RoleName } from "@/lib/authz/permissions";
+import { signInSchema, verifyCredentials } from "./credentials";
+import { clientIp } from "./ip";
+
+declare module "next-auth" {
+  interface User {
+    role?: RoleName;
+    companyId?: string;
+  }
+  interface Session {
+    user: { id: string; role: RoleName; companyId: string; name: string; email: string };
+  }
+}
+
+class RateLimited extends CredentialsSignin {
+  code = "rate_limited";
+}
+
+const isProd = process.env.NODE_ENV === "production";
+
+export const { handlers, auth, signIn, signOut } = NextAuth({
+  trustHost: true,
+  session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
+  pages: { signIn: "/sign-in" },
+  // HttpOnly + SameSite=Lax are next-auth's defaults; Secure (and the __Secure- prefix) whenever served over HTTPS.
+  useSecureCookies: isProd && (process.env.AUTH_URL ?? "").startsWith("https://"),
+  providers: [
+    Credentials({
+      credentials: { email: {}, password: {} },
+      // The only way a password becomes a session; the limiter and the activity log sit inside it,
+      // so posting to the callback URL directly is throttled the same as the sign-in form.
+      async authorize(raw, request) {
+        const parsed = signInSchema.safeParse(raw);
+        if (!parsed.success) return null;
+        const result = await verifyCredentials(getDb(), { ...parsed.data, ip: clientIp(request.headers) });
+        if (!result.ok) {
+          if (result.reason === "locked") throw new RateLimited();
+          return null;
+        }
+        const { id, name, email, role, companyId } = result.user;
+        return { id, name, email, role, companyId };
+      },
+    }),
+  ],
+  callbacks: {
+    jwt({ token, user }) {
+      if (user) {
+        token.uid = user.id;
+        token.role = user.role;
+        token.companyId = user.companyId;
+      }
+      return token;
+    },
+    session({ session, token }) {
+      session.user.id = token.uid as string;
+      session.user.role = token.role as RoleName;
+      session.user.companyId = token.companyId as string;
+      return session;
+    },
+  },
+  logger: {
+    // next-auth prints a stack for every failed sign-in; those are expected and already in the activity log.
+    error(error) {
+      const type = (error as { type?: string }).type;
+      if (type === "CredentialsSignin") return;
+      console.error(error);
+    },
+  },
+});

@@ -1,0 +1,80 @@
+// The one role → permission map. Server guards enforce it; the UI reads it only to hide
+// what a role cannot do (hiding is never the protection).
+export const roleNames = ["owner", "auditor", "installer", "homeowner"] as const;
+export type RoleName = (typeof roleNames)[number];
+
+export const permissions = [
+  "jobs:list",
+  "jobs:read",
+  "jobs:create",
+  "jobs:update",
+  "jobs:stage",
+  "assessment:read",
+  "assessment:write",
+  "prices:read",
+  "pricebook:manage",
+  "users:manage",
+  "crewlog:read",
+  "crewlog:write",
+  "leakage:write",
+  "photos:read",
+  "photos:upload",
+  "documents:issue",
+  "documents:read",
+  "proposals:accept",
+  "outbox:read",
+  "portal:read",
+  "activity:read",
+] as const;
+export type Permission = (typeof permissions)[number];
+
+const staffCommon: Permission[] = ["jobs:list", "jobs:read", "assessment:read", "crewlog:read", "photos:read", "photos:upload"];
+
+const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
+  owner: new Set<Permission>([
+    ...staffCommon,
+    "jobs:create",
+    "jobs:update",
+    "jobs:stage",
+    "assessment:write",
+    "prices:read",
+    "pricebook:manage",
+    "users:manage",
+    "leakage:write",
+    "documents:issue",
+    "documents:read",
+    "outbox:read",
+    "activity:read",
+  ]),
+  auditor: new Set<Permission>([
+    ...staffCommon,
+    "jobs:create",
+    "jobs:update",
+    "jobs:stage",
+    "assessment:write",
+    "prices:read",
+    "leakage:write",
+    "documents:issue",
+    "documents:read",
+    "outbox:read",
+  ]),
+  installer: new Set<Permission>([...staffCommon, "crewlog:write", "leakage:write"]),
+  homeowner: new Set<Permission>(["portal:read", "documents:read", "proposals:accept"]),
+};
+
+export function can(role: RoleName, permission: Permission): boolean {
+  return rolePermissions[role]?.has(permission) ?? false;
+}
+
+export function permissionsOf(role: RoleName): Permission[] {
+  return [...(rolePermissions[role] ?? [])];
+}
+
+export const isStaff = (role: RoleName) => role !== "homeowner";
+
+export const roleLabels: Record<RoleName, string> = {
+  owner: "Owner",
+  auditor: "Auditor",
+  installer: "Installer",
+  homeowner: "Homeowner",
+};

@@ -1,0 +1,12 @@
+import type { Permission } from "@/lib/authz/permissions";
+
+export type NavItem = { href: string; label: string; permission: Permission; match?: string };
+
+/** The office navigation, as data: each item is shown only to roles holding its permission. */
+export const officeNav: NavItem[] = [
+  { href: "/jobs", label: "Jobs", permission: "jobs:list" },
+  { href: "/team", label: "Team", permission: "users:manage" },
+  { href: "/activity", label: "Activity", permission: "activity:read" },
+];
+
+export const portalNav: NavItem[] = [{ href: "/portal", label: "My home", permission: "portal:read" }];

@@ -1,0 +1,27 @@
+import { describe, expect, it } from "vitest";
+import { can, permissions, roleNames } from "@/lib/authz/permissions";
+
+describe("role → permission map", () => {
+  it("gives homeowners only portal reading, their documents and accepting a proposal", () => {
+    const granted = permissions.filter((p) => can("homeowner", p));
+    expect(granted.sort()).toEqual(["documents:read", "portal:read", "proposals:accept"]);
+  });
+
+  it("keeps prices and user management away from installers", () => {
+    expect(can("installer", "prices:read")).toBe(false);
+    expect(can("installer", "users:manage")).toBe(false);
+    expect(can("installer", "assessment:write")).toBe(false);
+    expect(can("installer", "crewlog:write")).toBe(true);
+  });
+
+  it("lets only the owner manage users and the price book", () => {
+    for (const role of roleNames) {
+      expect(can(role, "users:manage")).toBe(role === "owner");
+      expect(can(role, "pricebook:manage")).toBe(role === "owner");
+    }
+  });
+
+  it("refuses an unknown role", () => {
+    expect(can("janitor" as never, "jobs:read")).toBe(false);
+  });
+});
