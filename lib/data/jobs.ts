@@ -1,0 +1,178 @@
+import "server-only";
+import { and, asc, count, desc, eq, inArray, like, max, or, sql } from "drizzle-orm";
+import { getDb } from "@/db";
+import { clients, houses, jobCrew, jobs, jobStageEvents, users, type JobStage } from "@/db/schema";
+import { ApiError, notFound } from "@/lib/api/errors";
+import type { AuthUser } from "@/lib/authz/guard";
+import type { JobListQuery, JobPatch, NewJobInput } from "@/lib/validation/job";
+import { logActivity } from "./activity";
+import { jobScope } from "./scope";
+
+export type JobListRow = {
+  id: string;
+  number: number;
+  title: string;
+  stage: JobStage;
+  clientName: string;
+  address: string;
+  auditorName: string | null;
+  updatedAt: number;
+};
+
+const sortColumns = {
+  updated: jobs.updatedAt,
+  number: jobs.number,
+  client: clients.name,
+  stage: jobs.stage,
+} as const;
+
+export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ jobs: JobListRow[]; total: number }> {
+  const db = getDb();
+  const conditions = [jobScope(db, user)];
+  if (query.stage) conditions.push(eq(jobs.stage, query.stage));
+  if (query.q) {
+    const term = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const esc = (col: Parameters<typeof like>[0]) => sql`${col} like ${term} escape '\\'`;
+    const byNumber = /^\d+$/.test(query.q) ? [eq(jobs.number, Number(query.q))] : [];
+    conditions.push(or(esc(clients.name), esc(houses.street), esc(houses.city), esc(jobs.title), ...byNumber)!);
+  }
+  const where = and(...conditions);
+  const order = query.dir === "asc" ? asc(sortColumns[query.sort]) : desc(sortColumns[query.sort]);
+
+  const [rows, [{ total }]] = await Promise.all([
+    db
+      .select({
+        id: jobs.id,
+        number: jobs.number,
+        title: jobs.title,
+        stage: jobs.stage,
+        clientName: clients.name,
+        street: houses.street,
+        city: houses.city,
+        auditorName: users.name,
+        updatedAt: jobs.updatedAt,
+      })
+      .from(jobs)
+      .innerJoin(clients, eq(clients.id, jobs.clientId))
+      .innerJoin(houses, eq(houses.id, jobs.houseId))
+      .leftJoin(users, eq(users.id, jobs.auditorId))
+      .where(where)
+      .orderBy(order, desc(jobs.number))
+      .limit(query.pageSize)
+      .offset((query.page - 1) * query.pageSize),
+    db
+      .select({ total: count() })
+      .from(jobs)
+      .innerJoin(clients, eq(clients.id, jobs.clientId))
+      .innerJoin(houses, eq(houses.id, jobs.houseId))
+      .where(where),
+  ]);
+  return {
+    total,
+    jobs: rows.map(({ street, city, updatedAt, ...r }) => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),
+  };
+}
+
+export async function getJob(user: AuthUser, id: string) {
+  const db = getDb();
+  const [row] = await db
+    .select({ job: jobs, house: houses, client: clients })
+    .from(jobs)
+    .innerJoin(houses, eq(houses.id, jobs.houseId))
+    .innerJoin(clients, eq(clients.id, jobs.clientId))
+    .where(and(eq(jobs.id, id), jobScope(db, user)));
+  if (!row) return null;
+  const [crew, history, auditor] = await Promise.all([
+    db.select({ id: users.id, name: users.name }).from(jobCrew).innerJoin(users, eq(users.id, jobCrew.userId)).where(eq(jobCrew.jobId, id)),
+    db
+      .select({ id: jobStageEvents.id, fromStage: jobStageEvents.fromStage, toStage: jobStageEvents.toStage, at: jobStageEvents.at, note: jobStageEvents.note, byName: users.name })
+      .from(jobStageEvents)
+      .innerJoin(users, eq(users.id, jobStageEvents.byUserId))
+      .where(eq(jobStageEvents.jobId, id))
+      .orderBy(desc(jobStageEvents.at)),
+    row.job.auditorId ? db.select({ id: users.id, name: users.name }).from(users).where(eq(users.id, row.job.auditorId)) : Promise.resolve([]),
+  ]);
+  return { ...row.job, house: row.house, client: row.client, crew, history, auditor: auditor[0] ?? null };
+}
+export type JobDetail = NonNullable<Awaited<ReturnType<typeof getJob>>>;
+
+export async function createJob(user: AuthUser, input: NewJobInput) {
+  const db = getDb();
+  const jobId = await db.transaction(async (tx) => {
+    const [client] = await tx
+      .insert(clients)
+      .values({ companyId: user.companyId, name: input.client.name, email: input.client.email ?? null, phone: input.client.phone ?? null })
+      .returning({ id: clients.id });
+    const { climateStationWmo, ...facts } = input.house;
+    const [house] = await tx
+      .insert(houses)
+      .values({ ...facts, ceilingHeightFt: facts.ceilingHeightFt ?? null, climateStationWmo: climateStationWmo ?? null, companyId: user.companyId, clientId: client.id })
+      .returning({ id: houses.id });
+    const [{ last }] = await tx.select({ last: max(jobs.number) }).from(jobs).where(eq(jobs.companyId, user.companyId));
+    const [job] = await tx
+      .insert(jobs)
+      .values({
+        companyId: user.companyId,
+        number: (last ?? 1000) + 1,
+        houseId: house.id,
+        clientId: client.id,
+        title: input.title ?? `${input.house.street}, ${input.house.city}`,
+        auditorId: user.role === "auditor" ? user.id : null,
+        createdById: user.id,
+      })
+      .returning({ id: jobs.id });
+    await tx.insert(jobStageEvents).values({ jobId: job.id, fromStage: null, toStage: "intake", byUserId: user.id });
+    return job.id;
+  });
+  await logActivity(db, { companyId: user.companyId, userId: user.id, action: "job.create", entityType: "job", entityId: jobId });
+  return (await getJob(user, jobId))!;
+}
+
+/** Applies a patch only if `version` is still current; a stale edit gets 409 with the record as it is now. */
+export async function updateJob(user: AuthUser, id: string, patch: JobPatch) {
+  const db = getDb();
+  const current = await getJob(user, id);
+  if (!current) throw notFound("Job");
+  if (current.version !== patch.version) {
+    throw new ApiError(409, "Someone else changed this job since you opened it. Review the current version and apply your change again.", undefined, { current });
+  }
+  if (patch.auditorId || patch.crewIds?.length) await assertStaffOfCompany(user, patch.auditorId, patch.crewIds);
+
+  const changed = await db.transaction(async (tx) => {
+    const set: Partial<typeof jobs.$inferInsert> = { version: current.version + 1, updatedAt: new Date() };
+    if (patch.title !== undefined) set.title = patch.title;
+    if (patch.stage !== undefined) set.stage = patch.stage;
+    if (patch.auditorId !== undefined) set.auditorId = patch.auditorId;
+    const res = await tx.update(jobs).set(set).where(and(eq(jobs.id, id), eq(jobs.version, patch.version))).returning({ id: jobs.id });
+    if (res.length === 0) return false;
+    if (patch.stage && patch.stage !== current.stage) {
+      await tx.insert(jobStageEvents).values({ jobId: id, fromStage: current.stage, toStage: patch.stage, byUserId: user.id, note: patch.stageNote ?? null });
+    }
+    if (patch.crewIds) {
+      await tx.delete(jobCrew).where(eq(jobCrew.jobId, id));
+      if (patch.crewIds.length) await tx.insert(jobCrew).values(patch.crewIds.map((userId) => ({ jobId: id, userId })));
+    }
+    return true;
+  });
+  if (!changed) {
+    const now = await getJob(user, id);
+    throw new ApiError(409, "Someone else changed this job since you opened it. Review the current version and apply your change again.", undefined, { current: now });
+  }
+  const { version: _v, ...detail } = patch;
+  void _v;
+  await logActivity(db, { companyId: user.companyId, userId: user.id, action: patch.stage && patch.stage !== current.stage ? "job.stage" : "job.update", entityType: "job", entityId: id, detail });
+  return (await getJob(user, id))!;
+}
+
+async function assertStaffOfCompany(user: AuthUser, auditorId?: string | null, crewIds?: string[]) {
+  const ids = [...(auditorId ? [auditorId] : []), ...(crewIds ?? [])];
+  const found = await getDb()
+    .select({ id: users.id, role: users.role })
+    .from(users)
+    .where(and(eq(users.companyId, user.companyId), inArray(users.id, ids), eq(users.disabled, false)));
+  const roleOf = new Map(found.map((u) => [u.id, u.role]));
+  const fields: Record<string, string[]> = {};
+  if (auditorId && !["auditor", "owner"].includes(roleOf.get(auditorId) ?? "")) fields.auditorId = ["Choose an active auditor of your company."];
+  if (crewIds?.some((c) => roleOf.get(c) !== "installer")) fields.crewIds = ["Crew members must be active installers of your company."];
+  if (Object.keys(fields).length) throw new ApiError(422, "Some fields need attention.", fields);
+}
