@@ -5,10 +5,11 @@ export const DEFAULT_HIGH_RATIO = 1.3;
 // Below 0.8× expected suggests voids or low density (common practice, METHODS.md §5)
 export const DEFAULT_LOW_RATIO = 0.8;
 
-export type CrewStatus = "as-expected" | "possible-bypass" | "possible-voids-or-low-density";
-export interface CrewCheck { surfaceId: string; surfaceName: string; expectedBags: number; actualBags: number; ratio: number; status: CrewStatus; message: string }
+export type CrewStatus = "as-expected" | "possible-bypass" | "possible-voids-or-low-density" | "no-estimate";
+export interface CrewCheck { surfaceId: string; surfaceName: string; expectedBags: number; actualBags: number; ratio: number | null; status: CrewStatus; message: string }
 
 export function checkWall(surfaceId: string, surfaceName: string, expectedBags: number, actualBags: number, high = DEFAULT_HIGH_RATIO, low = DEFAULT_LOW_RATIO): CrewCheck {
+  if (!(expectedBags > 0)) return { surfaceId, surfaceName, expectedBags, actualBags, ratio: null, status: "no-estimate", message: `${surfaceName}: the estimate expects no cavity to fill, so ${actualBags} bags cannot be compared.` };
   const ratio = actualBags / expectedBags;
   const r = ratio.toFixed(2);
   const counts = `${actualBags} bags against about ${expectedBags.toFixed(1)} expected (${r}×)`;

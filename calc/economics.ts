@@ -18,12 +18,14 @@ export function upvEscalated(d: number, e: number, years: number): number {
 
 /** Years to repay the cost from the first-year saving; null when there is no saving. */
 export function simplePayback(costUSD: number, annualSavingUSD: number): number | null {
-  return annualSavingUSD > 0 ? costUSD / annualSavingUSD : null;
+  const years = costUSD / annualSavingUSD;
+  return annualSavingUSD > 0 && Number.isFinite(years) ? years : null;
 }
 
 /** SIR = present value of lifetime energy-cost savings / installed cost; null for a zero cost. */
 export function savingsToInvestment(annualSavingUSD: number, costUSD: number, d: number, e: number, lifeYears: number): number | null {
-  return costUSD > 0 ? (annualSavingUSD * upvEscalated(d, e, lifeYears)) / costUSD : null;
+  const sir = (annualSavingUSD * upvEscalated(d, e, lifeYears)) / costUSD;
+  return costUSD > 0 && Number.isFinite(sir) ? sir : null;
 }
 
 // Measure lives, years: wall and attic insulation 20–30 → 25; air sealing 10–15 → 12 (from memory, METHODS.md §4);

@@ -2,6 +2,7 @@
 // NaN, infinities, negative areas, fractions outside 0–1, zero volumes and absurd
 // magnitudes are refused with the field's path.
 import { z } from "zod";
+import type { AssemblyLayer } from "./assemblies";
 
 const NUM = { error: (iss: { input?: unknown }) => (iss.input === undefined ? "is required" : "must be a finite number") };
 const num = () => z.number(NUM);
@@ -16,20 +17,22 @@ const life = () => int(1, 100).optional();
 export const surfaceKindSchema = z.enum(["wall", "ceiling", "floor"]);
 const presence = z.enum(["present", "absent", "unknown"]);
 
-const continuousLayerSchema = z.strictObject({ materialKey: text(100), thicknessIn: pos(48).optional(), rValueIP: pos(200).optional() });
-const framedLayerSchema = z.strictObject({
-  framed: z.strictObject({
-    member: z.enum(["2x3", "2x4", "2x6", "2x8", "2x10", "2x12", "rough-2x4", "1x2-furring", "custom"]),
-    depthIn: pos(24).optional(), spacingIn: range(8, 48).optional(), framingFraction: frac().optional(),
-    framingMaterial: z.enum(["wood", "steel"]).optional(), cavityFill: text(100).nullable(),
-    fillFraction: frac().optional(), fillRValueIP: pos(100).optional(),
-  }),
+const framedSpecSchema = z.strictObject({
+  member: z.enum(["2x3", "2x4", "2x6", "2x8", "2x10", "2x12", "rough-2x4", "1x2-furring", "custom"]),
+  depthIn: pos(24).optional(), spacingIn: range(8, 48).optional(), framingFraction: frac().optional(),
+  framingMaterial: z.enum(["wood", "steel"]).optional(), cavityFill: text(100).nullable(),
+  fillFraction: frac().optional(), fillRValueIP: pos(100).optional(),
 });
+// One object shape for both layer kinds (so errors keep their full field path), turned into the union.
+const layerSchema = z
+  .strictObject({ materialKey: text(100).optional(), thicknessIn: pos(48).optional(), rValueIP: pos(200).optional(), framed: framedSpecSchema.optional() })
+  .refine((l) => (l.framed === undefined) !== (l.materialKey === undefined), { error: "give either materialKey (a continuous layer) or framed (the framed layer)" })
+  .transform((l): AssemblyLayer => (l.framed ? { framed: l.framed } : { materialKey: l.materialKey!, thicknessIn: l.thicknessIn, rValueIP: l.rValueIP }));
 export const assemblySchema = z.object({
   key: text(100), name: text(), kind: surfaceKindSchema,
   construction: z.enum(["wood-frame", "steel-frame", "masonry"]),
   method: z.enum(["parallel-path", "isothermal-planes"]).optional(),
-  layers: z.array(z.union([framedLayerSchema, continuousLayerSchema])).min(1).max(30),
+  layers: z.array(layerSchema).min(1).max(30),
 });
 
 const openingSchema = z.object({

@@ -3,6 +3,7 @@
 import { computeAssembly, type AssemblyDef } from "./assemblies";
 import { builtInAssemblies } from "./built-in-assemblies";
 import { CalcInputError, type InputIssue } from "./errors";
+import { findStation } from "./climate/stations";
 import { getWindowOrDoor } from "./materials";
 import { houseInputSchema, type HouseInputParsed } from "./schema";
 
@@ -66,6 +67,7 @@ function semanticIssues(h: HouseInputParsed): { issues: InputIssue[]; assemblies
   });
   if (h.blowerDoor.cfm50TestOut !== undefined && h.blowerDoor.cfm50TestOut >= h.blowerDoor.cfm50TestIn && h.upgrades.some((u) => u.type === "air-sealing"))
     add("blowerDoor.cfm50TestOut", "is not below the test-in reading, so it cannot stand for the air sealing achieved");
+  if (h.climate.source === "station" && !findStation(h.climate.wmo)) add("climate.wmo", `station ${h.climate.wmo} is not in the station table: import its EPW file or type its HDD and design temperature`);
   h.crewLog.forEach((c, i) => { if (!ids.has(c.surfaceId)) add(`crewLog.${i}.surfaceId`, `no surface with id "${c.surfaceId}"`); });
   return { issues, assemblies };
 }
