@@ -7,7 +7,7 @@ import { checkWall } from "./crew-check";
 import { densePackEstimate, DEFAULT_STOREY_HEIGHT_FT, type DensePackEstimate } from "./dense-pack";
 import { CalcInputError } from "./errors";
 import { annualHeating, DEFAULT_GRID_LB_PER_KWH, type AnnualHeating } from "./energy";
-import { computeEnvelope, designHeatLoad } from "./envelope";
+import { computeEnvelope, designHeatLoad, envelopeTotals, type UAByComponent } from "./envelope";
 import { MEASURE_LIFE_YEARS, savingsToInvestment, simplePayback, upvEscalated } from "./economics";
 import { computeInfiltration } from "./infiltration";
 import { indoorDewPointF, moistureScreen } from "./moisture";
@@ -31,18 +31,33 @@ function assemblyOf(ctx: Ctx, state: HouseState) {
 }
 
 function evaluate(ctx: Ctx, state: HouseState) {
-  const { h } = ctx;
   const envelope = computeEnvelope(state.surfaces, assemblyOf(ctx, state));
-  const infiltration = computeInfiltration(state.cfm50, {
-    ...h.infiltration, volumeFt3: h.volumeFt3, stories: h.stories,
-    designDeltaTF: h.indoorTempF - ctx.designF,
+  const l = loadsAndEnergy(ctx, state.cfm50, envelope);
+  return { cfm50: state.cfm50, envelope, infiltration: l.infiltration, designLoad: l.designLoad, energy: l.energy };
+}
+
+/** Totals only: for the houses between upgrades, whose per-surface figures no report shows. */
+function evaluateTotals(ctx: Ctx, state: HouseState) {
+  const envelope = envelopeTotals(state.surfaces, assemblyOf(ctx, state));
+  const l = loadsAndEnergy(ctx, state.cfm50, envelope);
+  return { cfm50: state.cfm50, envelope, infiltration: l.infiltration, designLoad: l.designLoad, energy: l.energy };
+}
+
+function loadsAndEnergy(ctx: Ctx, cfm50: number, envelope: { ua: UAByComponent; totalUA: number }) {
+  const { h } = ctx;
+  const inf = h.infiltration;
+  const infiltration = computeInfiltration(cfm50, {
+    method: inf.method, nFactorZone: inf.nFactorZone, shielding: inf.shielding, nFactorOverride: inf.nFactorOverride,
+    shelterClass: inf.shelterClass, flowExponent: inf.flowExponent, seasonalDeltaTF: inf.seasonalDeltaTF,
+    seasonalWindMph: inf.seasonalWindMph, designWindMph: inf.designWindMph,
+    volumeFt3: h.volumeFt3, stories: h.stories, designDeltaTF: h.indoorTempF - ctx.designF,
   });
   const designLoad = designHeatLoad(envelope, infiltration.design.cfm, h.indoorTempF, ctx.designF);
   const energy = annualHeating({
     envelopeUA: envelope.totalUA, infiltrationCfm: infiltration.seasonal.cfm, hdd65: ctx.hdd65, correctionFactor: h.correctionFactor,
     fuel: h.heating.fuel, efficiency: h.heating.efficiency, pricePerUnitUSD: h.heating.pricePerUnitUSD, gridLbPerKWh: h.gridLbPerKWh ?? DEFAULT_GRID_LB_PER_KWH,
   });
-  return { cfm50: state.cfm50, envelope, infiltration, designLoad, energy };
+  return { infiltration, designLoad, energy };
 }
 export type HouseEvaluation = ReturnType<typeof evaluate>;
 
@@ -64,10 +79,12 @@ export function analyzePrepared(prepared: Prepared) {
   const baseline = evaluate(ctx, base);
   const { discountRate: d, fuelEscalationRate: e } = h.economics;
   let state = base;
-  let prev = baseline;
+  let prev: ReturnType<typeof evaluateTotals> = baseline;
+  let final = baseline;
   const upgrades = h.upgrades.map((u, i) => {
     const applied = applyUpgrade(state, u, `upgrades.${i}`, u.type === "air-sealing" ? h.blowerDoor.cfm50TestOut : undefined);
-    const after = evaluate(ctx, applied.state);
+    const last = i === h.upgrades.length - 1;
+    const after = last ? (final = evaluate(ctx, applied.state)) : evaluateTotals(ctx, applied.state);
     const s = savings(prev.energy, after.energy);
     const lifeYears = u.lifeYears ?? MEASURE_LIFE_YEARS[u.type];
     const result = {
@@ -82,7 +99,6 @@ export function analyzePrepared(prepared: Prepared) {
     prev = after;
     return result;
   });
-  const final = prev;
   const totalCost = upgrades.reduce((a, u) => a + u.costUSD, 0);
   const pvSavings = upgrades.reduce((a, u) => a + u.savings.usd * u.upvFactor, 0);
   const pkg = savings(baseline.energy, final.energy);

@@ -84,8 +84,18 @@ function continuousR(l: ContinuousLayer, path: string): LayerResult {
   return { label: m.name, materialKey: m.key, rValueIP: layerRValueIP(m, l.thicknessIn), source: m.source };
 }
 
+// Results are memoised per definition object (a pure function of it); the built-in
+// assemblies and their upgraded variants are module-level objects, so they hit this.
+const memo = new WeakMap<AssemblyDef, AssemblyResult>();
+
 /** U-factor of an assembly by both methods; `path` names the input for errors. */
 export function computeAssembly(def: AssemblyDef, path = "assembly"): AssemblyResult {
+  let r = memo.get(def);
+  if (!r) { r = computeAssemblyUncached(def, path); memo.set(def, r); }
+  return r;
+}
+
+function computeAssemblyUncached(def: AssemblyDef, path: string): AssemblyResult {
   const framedIdx = def.layers.findIndex((l) => "framed" in l);
   if (def.layers.filter((l) => "framed" in l).length > 1) throw CalcInputError.at(`${path}.layers`, "an assembly may have only one framed layer");
   const outside: LayerResult[] = [];

@@ -57,15 +57,47 @@ export function computeSurface(s: SurfaceDef, a: AssemblyResult, path: string): 
   };
 }
 
-export function computeEnvelope(surfaces: SurfaceDef[], assembly: (key: string, path: string) => AssemblyResult, path = "surfaces"): EnvelopeResult {
-  const ua: UAByComponent = { walls: 0, ceilings: 0, floors: 0, windows: 0, doors: 0 };
-  const results = surfaces.map((s, i) => {
-    const r = computeSurface(s, assembly(s.assemblyKey, `${path}.${i}.assemblyKey`), `${path}.${i}`);
-    ua[s.kind === "wall" ? "walls" : s.kind === "ceiling" ? "ceilings" : "floors"] += r.opaqueUA;
-    for (const o of r.openings) ua[o.kind === "window" ? "windows" : "doors"] += o.ua;
-    return r;
-  });
+export type AssemblyLookup = (key: string, path: string) => AssemblyResult;
+
+export function computeEnvelope(surfaces: SurfaceDef[], assembly: AssemblyLookup, path = "surfaces"): EnvelopeResult {
+  const results: SurfaceResult[] = new Array(surfaces.length);
+  for (let i = 0; i < surfaces.length; i++) {
+    const s = surfaces[i];
+    results[i] = computeSurface(s, assembly(s.assemblyKey, path), `${path}.${i}`);
+  }
+  const ua = sumByComponent(results);
   return { surfaces: results, ua, totalUA: ua.walls + ua.ceilings + ua.floors + ua.windows + ua.doors };
+}
+
+function sumByComponent(results: SurfaceResult[]): UAByComponent {
+  let walls = 0, ceilings = 0, floors = 0, windows = 0, doors = 0;
+  for (const r of results) {
+    if (r.kind === "wall") walls += r.opaqueUA; else if (r.kind === "ceiling") ceilings += r.opaqueUA; else floors += r.opaqueUA;
+    for (const o of r.openings) if (o.kind === "window") windows += o.ua; else doors += o.ua;
+  }
+  return { walls, ceilings, floors, windows, doors };
+}
+
+/**
+ * The same UA totals without per-surface results, for the intermediate houses of an
+ * upgrade sequence (inputs already validated, so no error paths are built here).
+ */
+export function envelopeTotals(surfaces: SurfaceDef[], assembly: AssemblyLookup): Pick<EnvelopeResult, "ua" | "totalUA"> {
+  let walls = 0, ceilings = 0, floors = 0, windows = 0, doors = 0;
+  for (const s of surfaces) {
+    const bf = s.bufferFactor ?? 1;
+    let openArea = 0;
+    if (s.openings) for (const o of s.openings) {
+      const area = o.areaFt2 * (o.count ?? 1);
+      openArea += area;
+      const u = o.uFactorIP ?? getWindowOrDoor(o.productKey!)!.uFactorIP;
+      if (o.kind === "window") windows += u * area * bf; else doors += u * area * bf;
+    }
+    const opaque = assembly(s.assemblyKey, "surfaces").uFactorIP * (s.grossAreaFt2 - openArea) * bf;
+    if (s.kind === "wall") walls += opaque; else if (s.kind === "ceiling") ceilings += opaque; else floors += opaque;
+  }
+  const ua = { walls, ceilings, floors, windows, doors };
+  return { ua, totalUA: walls + ceilings + floors + windows + doors };
 }
 
 export interface DesignLoad {
@@ -77,15 +109,15 @@ export interface DesignLoad {
 }
 
 /** q = (UA + 1.08·CFM_nat)·(t_in − t_design). */
-export function designHeatLoad(env: EnvelopeResult, infiltrationCfm: number, indoorF: number, outdoorF: number): DesignLoad {
+export function designHeatLoad(env: Pick<EnvelopeResult, "ua" | "totalUA">, infiltrationCfm: number, indoorF: number, outdoorF: number): DesignLoad {
   const dT = indoorF - outdoorF;
   const infUA = AIR_BTUH_PER_CFM_F * infiltrationCfm;
   const total = env.totalUA + infUA;
-  const s = (x: number) => (total > 0 ? x / total : 0);
+  const k = total > 0 ? 1 / total : 0;
   return {
     indoorF, outdoorF, deltaTF: dT, envelopeUA: env.totalUA, infiltrationCfm, infiltrationUA: infUA,
     envelopeBtuh: env.totalUA * dT, infiltrationBtuh: infUA * dT, totalBtuh: total * dT,
-    share: { walls: s(env.ua.walls), ceilings: s(env.ua.ceilings), floors: s(env.ua.floors), windows: s(env.ua.windows), doors: s(env.ua.doors), infiltration: s(infUA) },
+    share: { walls: env.ua.walls * k, ceilings: env.ua.ceilings * k, floors: env.ua.floors * k, windows: env.ua.windows * k, doors: env.ua.doors * k, infiltration: infUA * k },
     formula: "q = (UA + 1.08 × CFM_nat) × (t_in − t_design)",
   };
 }

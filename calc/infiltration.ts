@@ -56,11 +56,16 @@ export function nFactor(zone: 1 | 2 | 3 | 4, stories: number, shielding: Shieldi
   return { n: N_ZONE[zone] * height * N_SHIELDING[shielding], zoneFactor: N_ZONE[zone], heightFactor: height, shieldingFactor: N_SHIELDING[shielding] };
 }
 
+function byStories(row: number[], s: number): number {
+  return s <= 2 ? row[0] + (row[1] - row[0]) * (s - 1) : row[1] + (row[2] - row[1]) * (s - 2);
+}
+
 /** Basic-model coefficients in IP, interpolated linearly between 1, 2 and 3 stories. */
 export function basicCoefficients(stories: number, shelter: ShelterClass) {
   const s = Math.min(3, Math.max(1, stories));
-  const pick = (row: number[]) => interp([[1, row[0]], [2, row[1]], [3, row[2]]], s);
-  return { csIP: csIP(pick(CS_SI)), cwIP: cwIP(pick(CW_SI[shelter])), csSI: pick(CS_SI), cwSI: pick(CW_SI[shelter]) };
+  const cs = byStories(CS_SI, s);
+  const cw = byStories(CW_SI[shelter], s);
+  return { csIP: csIP(cs), cwIP: cwIP(cw), csSI: cs, cwSI: cw };
 }
 
 /** Q = A_L·√(Cs·ΔT + Cw·U²), cfm, with A_L in in². */
@@ -85,12 +90,11 @@ export function computeInfiltration(cfm50: number, o: InfiltrationOptions) {
   const c = basicCoefficients(o.stories, o.shelterClass);
   const seasonalCfm = basicModelCfm(ela.in2, c.csIP, c.cwIP, o.seasonalDeltaTF, o.seasonalWindMph);
   const designCfm = basicModelCfm(ela.in2, c.csIP, c.cwIP, o.designDeltaTF, o.designWindMph);
-  const toAch = (cfm: number) => (cfm * 60) / o.volumeFt3;
-  const nFactorResult = { ...nf, n: N, overridden: o.nFactorOverride !== undefined, achNat: nAch, cfmNat: (nAch * o.volumeFt3) / 60, source: "Sherman 1987, Energy and Buildings 10:81–86 (N table from memory)" };
+  const nFactorResult = { n: N, zoneFactor: nf.zoneFactor, heightFactor: nf.heightFactor, shieldingFactor: nf.shieldingFactor, overridden: o.nFactorOverride !== undefined, achNat: nAch, cfmNat: (nAch * o.volumeFt3) / 60, source: "Sherman 1987, Energy and Buildings 10:81–86 (N table from memory)" };
   const basic = {
-    ...c, shelterClass: o.shelterClass,
-    seasonal: { deltaTF: o.seasonalDeltaTF, windMph: o.seasonalWindMph, cfm: seasonalCfm, ach: toAch(seasonalCfm) },
-    design: { deltaTF: o.designDeltaTF, windMph: o.designWindMph, cfm: designCfm, ach: toAch(designCfm) },
+    csIP: c.csIP, cwIP: c.cwIP, csSI: c.csSI, cwSI: c.cwSI, shelterClass: o.shelterClass,
+    seasonal: { deltaTF: o.seasonalDeltaTF, windMph: o.seasonalWindMph, cfm: seasonalCfm, ach: (seasonalCfm * 60) / o.volumeFt3 },
+    design: { deltaTF: o.designDeltaTF, windMph: o.designWindMph, cfm: designCfm, ach: (designCfm * 60) / o.volumeFt3 },
     source: "ASHRAE HoF basic model; coefficients from EnergyPlus I/O Reference group-airflow.tex, converted SI→IP",
   };
   const useN = o.method === "n-factor";
@@ -98,9 +102,9 @@ export function computeInfiltration(cfm50: number, o: InfiltrationOptions) {
     cfm50, volumeFt3: o.volumeFt3, ach50: a50, flowExponent: o.flowExponent, ela, nFactor: nFactorResult, ashraeBasic: basic,
     method: o.method,
     /** Heating-season natural rate used for annual energy. */
-    seasonal: useN ? { cfm: nFactorResult.cfmNat, ach: nAch } : { cfm: seasonalCfm, ach: toAch(seasonalCfm) },
+    seasonal: useN ? { cfm: nFactorResult.cfmNat, ach: nAch } : { cfm: seasonalCfm, ach: (seasonalCfm * 60) / o.volumeFt3 },
     /** Natural rate used for the design heat load. */
-    design: useN ? { cfm: nFactorResult.cfmNat, ach: nAch } : { cfm: designCfm, ach: toAch(designCfm) },
+    design: useN ? { cfm: nFactorResult.cfmNat, ach: nAch } : { cfm: designCfm, ach: (designCfm * 60) / o.volumeFt3 },
   };
 }
 export type InfiltrationResult = ReturnType<typeof computeInfiltration>;

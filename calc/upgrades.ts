@@ -43,8 +43,10 @@ function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | s
     state.surfaces.forEach((s, i) => { if (kind === null || s.kind === kind) out.add(i); });
     return out;
   }
+  const index = new Map<string, number>();
+  state.surfaces.forEach((s, i) => index.set(s.id, i));
   ids.forEach((id, j) => {
-    const i = state.surfaces.findIndex((s) => s.id === id);
+    const i = index.get(id) ?? -1;
     if (i < 0) throw CalcInputError.at(`${path}.${j}`, `no surface with id "${id}"`);
     if (kind !== null && state.surfaces[i].kind !== kind) throw CalcInputError.at(`${path}.${j}`, `surface "${id}" is a ${state.surfaces[i].kind}, not a ${kind}`);
     out.add(i);
@@ -52,29 +54,36 @@ function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | s
   return out;
 }
 
+// Upgraded variants are memoised per (source definition, variant name): the same input
+// gives the same derived object, so its U-factor is computed once (see computeAssembly).
+const derived = new WeakMap<AssemblyDef, Map<string, AssemblyDef>>();
+
+function variant(def: AssemblyDef, suffix: string, derive: (def: AssemblyDef) => AssemblyDef): AssemblyDef {
+  let m = derived.get(def);
+  if (!m) { m = new Map(); derived.set(def, m); }
+  let d = m.get(suffix);
+  if (!d) { d = { ...derive(def), key: `${def.key}${suffix}` }; m.set(suffix, d); }
+  return d;
+}
+
 /** Re-point chosen surfaces to a derived assembly made by `derive` (one per source assembly). */
-function reassign(state: HouseState, idx: Set<number>, suffix: string, derive: (def: AssemblyDef, surfaceIdx: number) => AssemblyDef): HouseState {
+function reassign(state: HouseState, idx: Set<number>, suffix: string, derive: (def: AssemblyDef) => AssemblyDef): HouseState {
   const assemblies = new Map(state.assemblies);
-  const made = new Map<string, string>();
-  const surfaces = state.surfaces.map((s, i) => {
-    if (!idx.has(i)) return s;
-    let key = made.get(s.assemblyKey);
-    if (!key) {
-      const d = derive(state.assemblies.get(s.assemblyKey)!, i);
-      key = `${s.assemblyKey}${suffix}`;
-      assemblies.set(key, { ...d, key });
-      made.set(s.assemblyKey, key);
-    }
-    return { ...s, assemblyKey: key };
-  });
-  return { ...state, assemblies, surfaces };
+  const surfaces = state.surfaces.slice();
+  for (const i of idx) {
+    const s = surfaces[i];
+    const d = variant(state.assemblies.get(s.assemblyKey)!, suffix, derive);
+    assemblies.set(d.key, d);
+    surfaces[i] = { ...s, assemblyKey: d.key };
+  }
+  return { assemblies, surfaces, cfm50: state.cfm50 };
 }
 
 export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, testOutCfm50?: number): AppliedUpgrade {
   if (u.type === "dense-pack-walls") {
     const idx = chosen(state, u.surfaceIds, "wall", `${path}.surfaceIds`);
     for (const i of idx) if (!framedOf(state.assemblies.get(state.surfaces[i].assemblyKey)!)) throw CalcInputError.at(`${path}.surfaceIds`, `surface "${state.surfaces[i].id}" has no framed cavity to dense-pack`);
-    const next = reassign(state, idx, "+dense-pack", (def) => ({
+    const next = reassign(state, idx, `+dense-pack${u.rPerInchIP !== undefined ? `-R${u.rPerInchIP}/in` : ""}`, (def) => ({
       ...def, name: `${def.name}, dense-packed`,
       layers: def.layers.map((l) => ("framed" in l ? { framed: { ...l.framed, cavityFill: DENSE_PACK, fillFraction: 1, fillRValueIP: u.rPerInchIP !== undefined ? u.rPerInchIP * (memberDepthIn(l.framed) ?? 0) : undefined } } : l)),
     }));
@@ -82,12 +91,14 @@ export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, t
   }
   if (u.type === "attic-insulation") {
     const idx = chosen(state, u.surfaceIds, "ceiling", `${path}.surfaceIds`);
-    const added: { surfaceId: string; existingRIP: number; addedRIP: number; addedInches: number }[] = [];
     const rPerIn = getMaterial(ATTIC_FILL)!.rPerInchIP!;
-    const next = reassign(state, idx, `+attic-R${u.targetRIP}`, (def, i) => {
-      const existing = nominalInsulationR(def);
+    const added = [...idx].map((i) => {
+      const existing = nominalInsulationR(state.assemblies.get(state.surfaces[i].assemblyKey)!);
       const add = Math.max(0, u.targetRIP - existing);
-      added.push({ surfaceId: state.surfaces[i].id, existingRIP: existing, addedRIP: add, addedInches: add / rPerIn });
+      return { surfaceId: state.surfaces[i].id, existingRIP: existing, addedRIP: add, addedInches: add / rPerIn };
+    });
+    const next = reassign(state, idx, `+attic-R${u.targetRIP}`, (def) => {
+      const add = Math.max(0, u.targetRIP - nominalInsulationR(def));
       if (add === 0) return def;
       return { ...def, name: `${def.name}, insulated to R-${u.targetRIP}`, layers: [def.layers[0], { materialKey: ATTIC_FILL, thicknessIn: add / rPerIn }, ...def.layers.slice(1)] };
     });
