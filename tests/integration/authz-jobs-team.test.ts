@@ -2,6 +2,7 @@
 import { describe, expect, it, vi } from "vitest";
 import { actAs } from "../support/auth-mock";
 import { call, form } from "../support/route";
+import { actors, runAction, type Actor } from "./matrix-support";
 import { ids, seededDbForFile } from "./setup";
 
 vi.mock("@/lib/auth", () => import("../support/auth-mock"));
@@ -14,18 +15,6 @@ const teamActions = await import("@/app/(office)/team/actions");
 
 const ctx = seededDbForFile();
 
-const actors = {
-  anonymous: null,
-  "homeowner of the job": ids.homeowner,
-  "homeowner of another job": ids.homeowner2,
-  "installer assigned": ids.installer,
-  "installer not assigned": ids.installer2,
-  auditor: ids.auditor,
-  owner: ids.owner,
-  "user of another company": ids.otherOwner,
-} as const;
-type Actor = keyof typeof actors;
-
 const newJob = {
   client: { name: "Matrix Client" },
   house: { street: "1 Test Lane", city: "Harrowmere", state: "NJ", postalCode: "07000", yearBuilt: 1950, stories: "1", conditionedAreaFt2: 1200, volumeFt3: 9600, bedrooms: 2, foundation: "slab", shielding: "normal" },
@@ -35,23 +24,6 @@ async function currentVersion() {
   actAs(ids.owner);
   const r = await call(jobRoute.GET as never, { params: { id: ids.demoJob } });
   return (r.json.job as { version: number }).version;
-}
-
-/** Server actions answer with state, not status; map it to the status a route would give. */
-function actionStatus(state: { ok?: boolean; message?: string }) {
-  if (state.ok) return 200;
-  if (state.message === "Please sign in.") return 401;
-  if (state.message === "Your role does not allow this.") return 403;
-  if (state.message?.includes("not found")) return 404;
-  return 422;
-}
-async function runAction(action: (s: object, fd: FormData) => Promise<{ ok?: boolean; message?: string }>, fd: FormData) {
-  try {
-    return actionStatus(await action({}, fd));
-  } catch (err) {
-    if ((err as { digest?: string }).digest?.startsWith("NEXT_REDIRECT")) return 303;
-    throw err;
-  }
 }
 
 const matrix: { name: string; expect: Record<Actor, number>; run: (as: string | null) => Promise<number> }[] = [
