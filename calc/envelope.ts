@@ -29,21 +29,20 @@ export interface SurfaceResult {
 export interface UAByComponent { walls: number; ceilings: number; floors: number; windows: number; doors: number }
 export interface EnvelopeResult { surfaces: SurfaceResult[]; ua: UAByComponent; totalUA: number }
 
-function openingU(o: OpeningDef, path: string): { u: number; src: string; label: string } {
-  if (o.uFactorIP !== undefined) return { u: o.uFactorIP, src: "entered by the auditor", label: o.label ?? o.kind };
-  if (o.productKey === undefined) throw CalcInputError.at(path, "give either productKey or uFactorIP");
+function openingResult(o: OpeningDef, bf: number, surfacePath: string, j: number): OpeningResult {
+  const area = o.areaFt2 * (o.count ?? 1);
+  if (o.uFactorIP !== undefined) return { kind: o.kind, label: o.label ?? o.kind, areaFt2: area, uFactorIP: o.uFactorIP, uFactorSource: "entered by the auditor", ua: o.uFactorIP * area * bf };
+  if (o.productKey === undefined) throw CalcInputError.at(`${surfacePath}.openings.${j}`, "give either productKey or uFactorIP");
   const p = getWindowOrDoor(o.productKey);
-  if (!p) throw CalcInputError.at(`${path}.productKey`, `unknown window or door "${o.productKey}"`);
-  return { u: p.uFactorIP, src: p.source, label: o.label ?? p.name };
+  if (!p) throw CalcInputError.at(`${surfacePath}.openings.${j}.productKey`, `unknown window or door "${o.productKey}"`);
+  return { kind: o.kind, label: o.label ?? p.name, areaFt2: area, uFactorIP: p.uFactorIP, uFactorSource: p.source, ua: p.uFactorIP * area * bf };
 }
 
 export function computeSurface(s: SurfaceDef, a: AssemblyResult, path: string): SurfaceResult {
   const bf = s.bufferFactor ?? 1;
-  const openings: OpeningResult[] = (s.openings ?? []).map((o, j) => {
-    const { u, src, label } = openingU(o, `${path}.openings.${j}`);
-    const area = o.areaFt2 * (o.count ?? 1);
-    return { kind: o.kind, label, areaFt2: area, uFactorIP: u, uFactorSource: src, ua: u * area * bf };
-  });
+  const defs = s.openings ?? [];
+  const openings: OpeningResult[] = new Array(defs.length);
+  for (let j = 0; j < defs.length; j++) openings[j] = openingResult(defs[j], bf, path, j);
   let openingsArea = 0;
   let openingsUA = 0;
   for (const o of openings) { openingsArea += o.areaFt2; openingsUA += o.ua; }

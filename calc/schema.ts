@@ -5,13 +5,28 @@ import { z } from "zod";
 import type { AssemblyLayer } from "./assemblies";
 
 const NUM = { error: (iss: { input?: unknown }) => (iss.input === undefined ? "is required" : "must be a finite number") };
-const num = () => z.number(NUM);
-const pos = (max: number) => num().gt(0, { error: "must be greater than 0" }).max(max, { error: `must be at most ${max.toLocaleString("en-US")}` });
-const nonneg = (max: number) => num().min(0, { error: "must not be negative" }).max(max, { error: `must be at most ${max.toLocaleString("en-US")}` });
-const frac = () => num().min(0, { error: "must be between 0 and 1" }).max(1, { error: "must be between 0 and 1" });
-const range = (min: number, max: number) => num().min(min, { error: `must be between ${min} and ${max}` }).max(max, { error: `must be between ${min} and ${max}` });
-const int = (min: number, max: number) => range(min, max).int({ error: "must be a whole number" });
-const text = (max = 200) => z.string().min(1, { error: "must not be empty" }).max(max, { error: `must be at most ${max} characters` });
+const fmt = (x: number) => x.toLocaleString("en-US");
+
+/** A finite number within bounds, checked in one pass (one zod check per field keeps parsing fast). */
+function bounded(min: number, max: number, opts: { exclusiveMin?: boolean; int?: boolean; below?: string; above?: string } = {}) {
+  const below = opts.below ?? (opts.exclusiveMin ? `must be greater than ${fmt(min)}` : `must be at least ${fmt(min)}`);
+  const above = opts.above ?? `must be at most ${fmt(max)}`;
+  return z.number(NUM).check((ctx) => {
+    const v = ctx.value;
+    const msg = (opts.exclusiveMin ? v <= min : v < min) ? below : v > max ? above : opts.int && !Number.isInteger(v) ? "must be a whole number" : null;
+    if (msg) ctx.issues.push({ code: "custom", message: msg, input: v });
+  });
+}
+const pos = (max: number) => bounded(0, max, { exclusiveMin: true, below: "must be greater than 0" });
+const nonneg = (max: number) => bounded(0, max, { below: "must not be negative" });
+const frac = () => bounded(0, 1, { below: "must be between 0 and 1", above: "must be between 0 and 1" });
+const range = (min: number, max: number) => bounded(min, max, { below: `must be between ${min} and ${max}`, above: `must be between ${min} and ${max}` });
+const int = (min: number, max: number) => bounded(min, max, { int: true, below: `must be between ${min} and ${max}`, above: `must be between ${min} and ${max}` });
+const text = (max = 200) => z.string().check((ctx) => {
+  const n = ctx.value.length;
+  if (n === 0) ctx.issues.push({ code: "custom", message: "must not be empty", input: ctx.value });
+  else if (n > max) ctx.issues.push({ code: "custom", message: `must be at most ${max} characters`, input: ctx.value });
+});
 const life = () => int(1, 100).optional();
 
 export const surfaceKindSchema = z.enum(["wall", "ceiling", "floor"]);
@@ -77,7 +92,7 @@ export const houseInputSchema = z.object({
   heating: z.object({
     fuel: z.enum(["natural-gas", "oil", "propane", "electric-resistance", "heat-pump"]),
     efficiency: z.discriminatedUnion("kind", [
-      z.object({ kind: z.literal("afue"), value: num().gt(0, { error: "must be greater than 0" }).max(1, { error: "must be at most 1 (write 78 % as 0.78)" }) }),
+      z.object({ kind: z.literal("afue"), value: bounded(0, 1, { exclusiveMin: true, below: "must be greater than 0", above: "must be at most 1 (write 78 % as 0.78)" }) }),
       z.object({ kind: z.literal("cop"), value: pos(8) }),
       z.object({ kind: z.literal("hspf"), value: pos(20) }),
     ]),

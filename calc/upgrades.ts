@@ -1,7 +1,7 @@
 // Upgrades applied in sequence: each one acts on the house as the earlier ones left it,
 // so package savings are not double-counted (METHODS.md §4).
 import { memberDepthIn, type AssemblyDef, type FramedLayerSpec } from "./assemblies";
-import type { SurfaceDef } from "./envelope";
+import type { OpeningDef, SurfaceDef } from "./envelope";
 import { CalcInputError } from "./errors";
 import { getMaterial } from "./materials";
 import type { UpgradeInput } from "./schema";
@@ -66,6 +66,14 @@ function variant(def: AssemblyDef, suffix: string, derive: (def: AssemblyDef) =>
   return d;
 }
 
+/** A copy of a surface with another assembly or openings (explicit fields: faster than a spread). */
+function surfaceWith(s: SurfaceDef, assemblyKey: string, openings: OpeningDef[] | undefined): SurfaceDef {
+  return {
+    id: s.id, name: s.name, kind: s.kind, orientation: s.orientation, grossAreaFt2: s.grossAreaFt2, assemblyKey,
+    heightFt: s.heightFt, openings, bufferFactor: s.bufferFactor, blockedBayFraction: s.blockedBayFraction,
+  };
+}
+
 /** Re-point chosen surfaces to a derived assembly made by `derive` (one per source assembly). */
 function reassign(state: HouseState, idx: Set<number>, suffix: string, derive: (def: AssemblyDef) => AssemblyDef): HouseState {
   const assemblies = new Map(state.assemblies);
@@ -74,7 +82,7 @@ function reassign(state: HouseState, idx: Set<number>, suffix: string, derive: (
     const s = surfaces[i];
     const d = variant(state.assemblies.get(s.assemblyKey)!, suffix, derive);
     assemblies.set(d.key, d);
-    surfaces[i] = { ...s, assemblyKey: d.key };
+    surfaces[i] = surfaceWith(s, d.key, s.openings);
   }
   return { assemblies, surfaces, cfm50: state.cfm50 };
 }
@@ -107,13 +115,20 @@ export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, t
   if (u.type === "air-sealing") {
     const after = testOutCfm50 ?? u.targetCfm50;
     if (after >= state.cfm50) throw CalcInputError.at(`${path}.targetCfm50`, `must be below the ${Math.round(state.cfm50)} CFM50 the house has at this step`);
-    return { state: { ...state, cfm50: after }, details: { fromCfm50: state.cfm50, toCfm50: after, basis: testOutCfm50 !== undefined ? "measured at test-out" : "target" }, description: `Air sealing from ${Math.round(state.cfm50)} to ${Math.round(after)} CFM50` };
+    return { state: { assemblies: state.assemblies, surfaces: state.surfaces, cfm50: after }, details: { fromCfm50: state.cfm50, toCfm50: after, basis: testOutCfm50 !== undefined ? "measured at test-out" : "target" }, description: `Air sealing from ${Math.round(state.cfm50)} to ${Math.round(after)} CFM50` };
   }
   const idx = chosen(state, u.surfaceIds, null, `${path}.surfaceIds`);
   let count = 0;
-  const surfaces = state.surfaces.map((s, i) => {
-    if (!idx.has(i) || !s.openings?.some((o) => o.kind === "window")) return s;
-    return { ...s, openings: s.openings.map((o) => { if (o.kind !== "window") return o; count += o.count ?? 1; return { ...o, productKey: undefined, uFactorIP: u.uFactorIP }; }) };
-  });
-  return { state: { ...state, surfaces }, details: { windowsReplaced: count, uFactorIP: u.uFactorIP }, description: `Replace ${count} window(s) with U-${u.uFactorIP} units` };
+  const surfaces = state.surfaces.slice();
+  for (const i of idx) {
+    const s = surfaces[i];
+    if (!s.openings?.some((o) => o.kind === "window")) continue;
+    const openings: OpeningDef[] = s.openings.map((o) => {
+      if (o.kind !== "window") return o;
+      count += o.count ?? 1;
+      return { kind: o.kind, areaFt2: o.areaFt2, count: o.count, uFactorIP: u.uFactorIP, label: o.label };
+    });
+    surfaces[i] = surfaceWith(s, s.assemblyKey, openings);
+  }
+  return { state: { assemblies: state.assemblies, surfaces, cfm50: state.cfm50 }, details: { windowsReplaced: count, uFactorIP: u.uFactorIP }, description: `Replace ${count} window(s) with U-${u.uFactorIP} units` };
 }
