@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, desc, eq, inArray, like, max, or, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, max, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { clients, houses, jobCrew, jobs, jobStageEvents, users, type JobStage } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
@@ -26,16 +26,21 @@ const sortColumns = {
   stage: jobs.stage,
 } as const;
 
+/**
+ * Search through the `job_search` full-text index (migration 0001: client name, street, town, title,
+ * number). Three or more characters use the trigram index; shorter terms scan it with LIKE.
+ */
+function matchesSearch(q: string) {
+  const term = q.length >= 3 ? `"${q.replace(/"/g, '""')}"` : `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+  const test = q.length >= 3 ? sql`job_search match ${term}` : sql`body like ${term} escape '\\'`;
+  return sql`${jobs}.rowid in (select rowid from job_search where ${test})`;
+}
+
 export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ jobs: JobListRow[]; total: number }> {
   const db = getDb();
   const conditions = [jobScope(db, user)];
   if (query.stage) conditions.push(eq(jobs.stage, query.stage));
-  if (query.q) {
-    const term = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    const esc = (col: Parameters<typeof like>[0]) => sql`${col} like ${term} escape '\\'`;
-    const byNumber = /^\d+$/.test(query.q) ? [eq(jobs.number, Number(query.q))] : [];
-    conditions.push(or(esc(clients.name), esc(houses.street), esc(houses.city), esc(jobs.title), ...byNumber)!);
-  }
+  if (query.q) conditions.push(matchesSearch(query.q));
   const where = and(...conditions);
   const order = query.dir === "asc" ? asc(sortColumns[query.sort]) : desc(sortColumns[query.sort]);
 
@@ -60,12 +65,8 @@ export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ j
       .orderBy(order, desc(jobs.number))
       .limit(query.pageSize)
       .offset((query.page - 1) * query.pageSize),
-    db
-      .select({ total: count() })
-      .from(jobs)
-      .innerJoin(clients, eq(clients.id, jobs.clientId))
-      .innerJoin(houses, eq(houses.id, jobs.houseId))
-      .where(where),
+    // Every job has its client and house (foreign keys), so the count needs no joins.
+    db.select({ total: count() }).from(jobs).where(where),
   ]);
   return {
     total,

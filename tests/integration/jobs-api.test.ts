@@ -146,3 +146,17 @@ describe("a disabled account", () => {
     await disableUser(ctx.t, ids.installer, false);
   });
 });
+
+describe("search index follows edits", () => {
+  it("finds a job by its client's new name after the client is renamed, and not by the old one", async () => {
+    const { clients } = await import("@/db/schema");
+    const { eq } = await import("drizzle-orm");
+    const { seedId } = await import("@/db/seed");
+    actAs(ids.owner);
+    expect((await list("q=Pashley-Wren")).json.total).toBe(1);
+    await ctx.t.db.update(clients).set({ name: "Eleanor Quenby" }).where(eq(clients.id, seedId("client:tansyfield")));
+    expect((await list("q=Quenby")).json.jobs.map((j) => j.number)).toEqual([1006]);
+    expect((await list("q=Pashley-Wren")).json.total).toBe(0);
+    expect((await list("q=QUENBY")).json.total).toBe(1); // case-insensitive
+  });
+});

@@ -1,0 +1,16 @@
+// `npm run bench`: prints speed and memory figures against their targets. It never fails a build:
+// figures depend on the machine and on what else runs on it, so read them, don't gate on them.
+import { runCalcBench } from "./calc";
+import { runJobsBench } from "./jobs";
+
+const only = process.argv[2];
+const benches: [string, () => Promise<void>][] = [
+  ["calc", runCalcBench],
+  ["jobs", runJobsBench],
+];
+
+console.log(`# Warmstead benchmarks — Node ${process.version}, ${(await import("node:os")).cpus().length} cores`);
+for (const [name, run] of benches) {
+  if (only && only !== name) continue;
+  await run();
+}

@@ -1,0 +1,130 @@
+// GET /api/jobs under load on the production server, beside a trivial handler on the same server.
+// Seeds 10,000 jobs into a temporary database. Targets (issue 2): p95 ≤ 20 ms and at least half
+// the trivial handler's throughput. Needs `npm run build` first. Prints figures; never fails.
+import autocannon from "autocannon";
+import { spawn } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { createDb } from "@/db";
+import { applyMigrations } from "@/db/migrate";
+import { clients, houses, jobs } from "@/db/schema";
+import { demoCompanyId, demoPassword, seedDatabase, seedId } from "@/db/seed";
+import { jobStages } from "@/lib/stages";
+
+const root = path.resolve(import.meta.dirname, "..");
+const PORT = 3190;
+const base = `http://127.0.0.1:${PORT}`;
+
+export async function seedManyJobs(url: string, n: number) {
+  const db = createDb(url);
+  await applyMigrations(db);
+  await seedDatabase(db);
+  const streets = ["Alder", "Birchwood", "Cinder", "Dovecote", "Elmstead", "Furrow", "Gable", "Hearth", "Ironbark", "Juniper"];
+  // 50 × 97 invented name pairs, so a surname search matches about 1 % of jobs, as a real one would.
+  const given = Array.from({ length: 50 }, (_, i) => `Given${i}`);
+  const family = Array.from({ length: 97 }, (_, i) => `Famname${String.fromCharCode(97 + (i % 26))}${i}`);
+  const batch = 500;
+  for (let start = 0; start < n; start += batch) {
+    await db.transaction(async (tx) => {
+      for (let i = start; i < Math.min(n, start + batch); i++) {
+        const clientId = seedId(`bench-client:${i}`);
+        const houseId = seedId(`bench-house:${i}`);
+        await tx.insert(clients).values({ id: clientId, companyId: demoCompanyId, name: `${given[i % 50]} ${family[i % 97]}` });
+        await tx.insert(houses).values({
+          id: houseId, companyId: demoCompanyId, clientId, street: `${i} ${streets[i % 10]} Road`, city: "Harrowmere", state: "NJ", postalCode: "07000",
+          yearBuilt: 1900 + (i % 120), stories: 2, conditionedAreaFt2: 1500, volumeFt3: 12000, bedrooms: 3, foundation: "basement",
+        });
+        await tx.insert(jobs).values({
+          id: seedId(`bench-job:${i}`), companyId: demoCompanyId, number: 2000 + i, houseId, clientId, title: `Bench job ${i}`,
+          stage: jobStages[i % jobStages.length], createdById: seedId("user:owner"), updatedAt: new Date(Date.now() - i * 60_000),
+        });
+      }
+    });
+  }
+  db.$client.close();
+}
+
+async function waitFor(url: string) {
+  for (let i = 0; i < 240; i++) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      /* starting */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`no answer from ${url}`);
+}
+
+/** Signs in through next-auth's own endpoints and returns the session cookie. */
+async function sessionCookie(email: string) {
+  const csrfRes = await fetch(`${base}/api/auth/csrf`);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const jar = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar },
+    body: new URLSearchParams({ csrfToken, email, password: demoPassword }),
+  });
+  const session = res.headers.getSetCookie().find((c) => c.includes("authjs.session-token="));
+  if (!session) throw new Error("sign-in for the bench failed");
+  return session.split(";")[0]!;
+}
+
+type Figures = { path: string; rps: number; p50: number; p95: number; p99: number; errors: number };
+
+async function load(pathAndQuery: string, cookie?: string): Promise<Figures> {
+  const latencies: number[] = [];
+  const instance = autocannon({ url: `${base}${pathAndQuery}`, connections: 8, duration: 6, headers: cookie ? { cookie } : {} });
+  // autocannon's run object is both a promise of the result and an event emitter of each response.
+  (instance as unknown as NodeJS.EventEmitter).on("response", (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
+  const result = await instance;
+  latencies.sort((a, b) => a - b);
+  const at = (p: number) => latencies[Math.min(latencies.length - 1, Math.floor(p * latencies.length))] ?? NaN;
+  return { path: pathAndQuery, rps: result.requests.average, p50: at(0.5), p95: at(0.95), p99: at(0.99), errors: result.non2xx + result.errors };
+}
+
+export async function runJobsBench() {
+  const dir = mkdtempSync(path.join(os.tmpdir(), "warmstead-bench-"));
+  const url = `file:${path.join(dir, "bench.db")}`;
+  console.log("\n## GET /api/jobs with 10,000 jobs (autocannon, 8 connections, 6 s each, loopback)");
+  const t0 = performance.now();
+  await seedManyJobs(url, 10_000);
+  console.log(`seeded 10,000 jobs in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+  const server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-p", String(PORT)], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: "production", DATABASE_URL: url, AUTH_SECRET: "bench-secret-0123456789abcdef0123", AUTH_TRUST_HOST: "true", NEXT_TELEMETRY_DISABLED: "1" },
+    stdio: "ignore",
+  });
+  try {
+    await waitFor(`${base}/api/health`);
+    const cookie = await sessionCookie("owner@kestrelbay.example");
+    await load("/api/health"); // warm-up
+    await load("/api/jobs", cookie);
+    const trivial = await load("/api/health");
+    const rows = [
+      trivial,
+      await load("/api/jobs", cookie),
+      await load("/api/jobs?q=Famnamef31", cookie),
+      await load("/api/jobs?q=Dovecote", cookie),
+      await load("/api/jobs?stage=installing", cookie),
+    ];
+    console.log("| route | req/s | p50 ms | p95 ms | p99 ms | non-2xx | throughput vs trivial |");
+    console.log("| --- | --- | --- | --- | --- | --- | --- |");
+    for (const r of rows) {
+      console.log(`| ${r.path} | ${r.rps.toFixed(0)} | ${r.p50} | ${r.p95} | ${r.p99} | ${r.errors} | ${(r.rps / trivial.rps).toFixed(2)} |`);
+    }
+    const jobsRows = rows.slice(1);
+    const worstP95 = Math.max(...jobsRows.map((r) => r.p95));
+    const worstRatio = Math.min(...jobsRows.map((r) => r.rps / trivial.rps));
+    console.log(`target p95 ≤ 20 ms: worst ${worstP95} ms → ${worstP95 <= 20 ? "met" : "NOT met"}`);
+    console.log(`target ≥ 0.5 × trivial throughput: worst ${worstRatio.toFixed(2)} → ${worstRatio >= 0.5 ? "met" : "NOT met"}`);
+  } finally {
+    server.kill("SIGTERM");
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) await runJobsBench();
