@@ -45,6 +45,7 @@ export const FRAMING_FRACTION: Record<SurfaceKind, { oc16: number; oc24: number 
 // Web of an 18-gauge (43 mil) steel stud, in.: the steel share of a framed layer is web / spacing (from memory)
 export const STEEL_WEB_IN = 0.0428;
 
+// Default method by construction: wood → parallel path; steel and masonry → isothermal planes (METHODS.md §1, ASHRAE Fundamentals, from memory)
 export const DEFAULT_METHOD: Record<Construction, UMethod> = {
   "wood-frame": "parallel-path", "steel-frame": "isothermal-planes", masonry: "isothermal-planes",
 };

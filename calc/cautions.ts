@@ -11,6 +11,7 @@ export interface HouseFacts {
 }
 export interface Caution { id: string; hazard: string; because: string; document: string; message: string }
 
+// Every caution defers to local codes and licensed practice (PRODUCT.md principles)
 const CLOSE = "Follow local codes and licensed practice.";
 // Year before which lead-based paint is presumed (EPA RRP rule, 40 CFR 745)
 export const LEAD_PAINT_YEAR = 1978;

@@ -16,6 +16,7 @@ export interface EpwLocation {
 }
 export interface EpwData { location: EpwLocation; hours: number; month: Uint8Array; day: Uint8Array; dryBulbC: Float64Array }
 
+// The eight header records of an EPW file, in order (EnergyPlus Auxiliary Programs, weather file format, from memory)
 const HEADERS = ["LOCATION", "DESIGN CONDITIONS", "TYPICAL/EXTREME PERIODS", "GROUND TEMPERATURES", "HOLIDAYS/DAYLIGHT SAVINGS", "COMMENTS 1", "COMMENTS 2", "DATA PERIODS"];
 // Hourly records in a non-leap year; the field count of an EPW record (EnergyPlus Auxiliary Programs, weather format)
 export const EPW_HOURS = 8760;

@@ -31,6 +31,7 @@ export interface Material {
   dataset?: DatasetRef;
 }
 
+// Source name of the open dataset (NREL/EnergyPlus datasets/, commit 1ad365f per the materials README)
 const DS = "EnergyPlus ASHRAE_2005_HOF_Materials.idf";
 
 /** A layer of fixed R from a dataset Material:NoMass or Material:AirGap entry. */
@@ -51,7 +52,9 @@ function dsPerInch(key: string, name: string, category: MaterialCategory, entry:
   return { key, name, category, rPerInchIP: (IN_TO_M / k) * R_SI_TO_IP, source: `${DS}, entry "${entry}" (k = ${k} W/m·K) [doc]`, dataset: { entry, conductivityWmK: k, thicknessM: entryThicknessM } };
 }
 
+// Common prefix of the dataset's mineral-fibre batt entries
 const MF = "Insulation: Mineral fiber - processed from rock - slag - or glass - ";
+// Surface films are not in the dataset: ASHRAE Fundamentals surface-resistance table, from memory
 const FILM = "ASHRAE Handbook—Fundamentals, surface film resistance table (from memory)";
 
 export const materials: readonly Material[] = [
@@ -130,6 +133,7 @@ export function layerRValueIP(m: Material, thicknessIn?: number): number {
 
 export interface WindowOrDoor { key: string; name: string; kind: "window" | "door"; uFactorIP: number; source: string }
 
+// Whole-unit U defaults (IECC default fenestration and door tables, from memory)
 const IECC_WIN = "IECC default glazed fenestration U-factor table (from memory)";
 const IECC_DOOR = "IECC default opaque door U-factor table (from memory)";
 
