@@ -6,6 +6,8 @@ export type NavItem = { href: string; label: string; permission: Permission; mat
 export const officeNav: NavItem[] = [
   { href: "/jobs", label: "Jobs", permission: "jobs:list" },
   { href: "/team", label: "Team", permission: "users:manage" },
+  { href: "/price-book", label: "Price book", permission: "prices:read" },
+  { href: "/outbox", label: "Outbox", permission: "outbox:read" },
   { href: "/activity", label: "Activity", permission: "activity:read" },
 ];
 

@@ -1,9 +1,11 @@
 import NextAuth, { CredentialsSignin } from "next-auth";
+import { z } from "zod";
 import Credentials from "next-auth/providers/credentials";
 import { getDb } from "@/db";
 import type { RoleName } from "@/lib/authz/permissions";
 import { signInSchema, verifyCredentials } from "./credentials";
 import { clientIp } from "./ip";
+import { TOKEN_PATTERN, verifySignInToken } from "./tokens";
 
 declare module "next-auth" {
   interface User {
@@ -18,6 +20,8 @@ declare module "next-auth" {
 class RateLimited extends CredentialsSignin {
   code = "rate_limited";
 }
+
+const tokenSchema = z.object({ token: z.string().regex(TOKEN_PATTERN) });
 
 const isProd = process.env.NODE_ENV === "production";
 
@@ -41,6 +45,21 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
           return null;
         }
         const { id, name, email, role, companyId } = result.user;
+        return { id, name, email, role, companyId };
+      },
+    }),
+    // E-mailed one-time sign-in links (/welcome/link/<token>): the token is checked and used up here,
+    // so a link works once whether it arrives through the welcome page or a direct post.
+    Credentials({
+      id: "token",
+      name: "One-time link",
+      credentials: { token: {} },
+      async authorize(raw, request) {
+        const parsed = tokenSchema.safeParse(raw);
+        if (!parsed.success) return null;
+        const user = await verifySignInToken(getDb(), parsed.data.token, clientIp(request.headers));
+        if (!user) return null;
+        const { id, name, email, role, companyId } = user;
         return { id, name, email, role, companyId };
       },
     }),

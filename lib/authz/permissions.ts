@@ -23,6 +23,8 @@ export const permissions = [
   "documents:read",
   "proposals:accept",
   "outbox:read",
+  "outbox:retry",
+  "clients:invite",
   "portal:read",
   "activity:read",
 ] as const;
@@ -44,6 +46,8 @@ const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
     "documents:issue",
     "documents:read",
     "outbox:read",
+    "outbox:retry",
+    "clients:invite",
     "activity:read",
   ]),
   auditor: new Set<Permission>([
@@ -57,6 +61,8 @@ const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
     "documents:issue",
     "documents:read",
     "outbox:read",
+    "outbox:retry",
+    "clients:invite",
   ]),
   installer: new Set<Permission>([...staffCommon, "crewlog:write", "leakage:write"]),
   homeowner: new Set<Permission>(["portal:read", "documents:read", "proposals:accept"]),

@@ -6,7 +6,7 @@ export const DEFAULT_MAIL_FROM = "Warmstead <no-reply@warmstead.localhost>";
 
 export type MailConfig = { host: string; port: number; secure: boolean; user?: string; pass?: string; from: string };
 
-export function mailConfig(env: NodeJS.ProcessEnv = process.env): MailConfig {
+export function mailConfig(env: Record<string, string | undefined> = process.env): MailConfig {
   const port = Number(env.SMTP_PORT);
   return {
     host: env.SMTP_HOST?.trim() || DEFAULT_SMTP_HOST,

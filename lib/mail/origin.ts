@@ -2,7 +2,7 @@
 // origin the request came to.
 let warned = false;
 
-export function appOrigin(headers: Headers, env: NodeJS.ProcessEnv = process.env): string {
+export function appOrigin(headers: Headers, env: Record<string, string | undefined> = process.env): string {
   const configured = (env.APP_URL || env.AUTH_URL)?.trim().replace(/\/+$/, "");
   if (configured) return new URL(configured).origin;
   if (env.NODE_ENV === "production" && !warned) {

@@ -12,6 +12,9 @@ import { lockedMessage, SIGN_IN_INVALID, signInSchema } from "@/lib/auth/credent
 import { clientIp } from "@/lib/auth/ip";
 import { retryAfterSeconds } from "@/lib/auth/limiter";
 import type { ActionState } from "@/lib/authz/actions";
+import { requestSignInLink } from "@/lib/data/invites";
+import { appOrigin } from "@/lib/mail";
+import { SIGN_IN_LINK_SENT, signInLinkRequestSchema } from "@/lib/validation/invite";
 
 /** Only same-site relative paths are followed after sign-in. */
 function safeNext(value: FormDataEntryValue | null): string | null {
@@ -42,6 +45,16 @@ export async function signInAction(_prev: ActionState, formData: FormData): Prom
   const [user] = await db.select({ role: users.role }).from(users).where(eq(users.email, email));
   const home = user?.role === "homeowner" ? "/portal" : "/jobs";
   redirect(safeNext(formData.get("next")) ?? home);
+}
+
+/** "E-mail me a sign-in link": the same answer whether or not the address has an account. */
+export async function requestSignInLinkAction(_prev: ActionState, formData: FormData): Promise<ActionState> {
+  const values = { email: String(formData.get("email") ?? "") };
+  const parsed = signInLinkRequestSchema.safeParse({ email: formData.get("email") });
+  if (!parsed.success) return { ok: false, fields: fieldErrorsFrom(parsed.error), values };
+  const h = await headers();
+  await requestSignInLink(parsed.data.email, appOrigin(h), clientIp(h));
+  return { ok: true, message: SIGN_IN_LINK_SENT, values };
 }
 
 export async function signOutAction() {

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { Wordmark } from "@/components/brand/logo";
 import { SignInForm } from "@/components/auth/sign-in-form";
@@ -17,6 +18,10 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <h1 className="text-2xl font-bold text-spruce-900">Sign in</h1>
         <p className="mt-1 text-ink-muted">Staff and homeowners use the same page.</p>
         <SignInForm next={next} />
+        <p className="mt-5 border-t border-line pt-4 text-sm text-ink-muted">
+          Homeowner without a password, or forgot it?{" "}
+          <Link href="/sign-in/link" className="font-semibold text-spruce-700 underline">E-mail me a sign-in link</Link>
+        </p>
       </div>
     </main>
   );
