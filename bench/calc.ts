@@ -1,6 +1,7 @@
 // Calc bench: analyzeHouse on a 60-surface house with 6 upgrades, and a full-year
 // EPW parse. Run: npx tsx bench/calc.ts (or through runCalcBench()).
 import { readFileSync } from "node:fs";
+import os from "node:os";
 import { PerformanceObserver } from "node:perf_hooks";
 import v8 from "node:v8";
 import vm from "node:vm";
@@ -79,6 +80,9 @@ export async function runCalcBench(): Promise<void> {
     const l = r.latency;
     console.log(`${t.name}\n  median ${ms(l.p50 ?? NaN)}  p75 ${ms(l.p75 ?? NaN)}  p99 ${ms(l.p99 ?? NaN)}  min ${ms(l.min)}  max ${ms(l.max)}  (${l.samplesCount} runs)`);
   }
+  // CPU time per call, less sensitive than wall time to other processes on a shared machine
+  const cpu = (f: () => void, n: number) => { const t = process.cpuUsage(); for (let i = 0; i < n; i++) f(); const d = process.cpuUsage(t); return (d.user + d.system) / 1000 / n; };
+  console.log(`CPU time per call: analyzeHouse ${ms(cpu(() => analyzeHouse(house), 2000))}, analyzePrepared ${ms(cpu(() => analyzePrepared(prepared), 2000))}, parseEpw ${ms(cpu(() => parseEpw(epwText), 30))}; load average ${os.loadavg()[0].toFixed(2)} on ${os.cpus().length} CPUs`);
   console.log(epwMemory(epwText));
   console.log(`Targets: analyzeHouse median ≤ ${TARGET_ANALYZE_MS} ms; EPW parse ≤ ${TARGET_EPW_MS} ms; EPW peak memory < ${TARGET_EPW_MEMORY_RATIO}× file size`);
 }

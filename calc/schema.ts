@@ -50,19 +50,51 @@ export const assemblySchema = z.object({
   layers: z.array(layerSchema).min(1).max(30),
 });
 
-const openingSchema = z.object({
-  kind: z.enum(["window", "door"]), areaFt2: pos(2_000), count: int(1, 200).optional(),
-  productKey: text(100).optional(), uFactorIP: pos(2).optional(), label: text().optional(),
-});
-export const surfaceSchema = z.object({
-  id: text(100), name: text(), kind: surfaceKindSchema,
-  orientation: z.enum(["N", "NE", "E", "SE", "S", "SW", "W", "NW", "horizontal"]),
-  grossAreaFt2: pos(20_000), assemblyKey: text(100), heightFt: pos(100).optional(),
-  openings: z.array(openingSchema).max(100).default([]),
-  bufferFactor: frac().optional(), blockedBayFraction: frac().optional(),
-});
+// Surfaces and openings are the bulk of a house (hundreds of objects): their bounds are
+// checked by one check per object instead of one per field, with the same messages and paths.
+type Bound = { min: number; max: number; excl?: boolean; int?: boolean; below: string; above: string };
+const B = {
+  pos: (max: number): Bound => ({ min: 0, max, excl: true, below: "must be greater than 0", above: `must be at most ${fmt(max)}` }),
+  frac: (): Bound => ({ min: 0, max: 1, below: "must be between 0 and 1", above: "must be between 0 and 1" }),
+  int: (min: number, max: number): Bound => ({ min, max, int: true, below: `must be between ${min} and ${max}`, above: `must be between ${min} and ${max}` }),
+};
+function boundsCheck(nums: Record<string, Bound>, texts: Record<string, number>) {
+  const numKeys = Object.keys(nums);
+  const textKeys = Object.keys(texts);
+  return (ctx: { value: Record<string, unknown>; issues: unknown[] }) => {
+    const v = ctx.value;
+    for (const k of numKeys) {
+      const x = v[k] as number | undefined;
+      if (x === undefined) continue;
+      const b = nums[k];
+      const msg = (b.excl ? x <= b.min : x < b.min) ? b.below : x > b.max ? b.above : b.int && !Number.isInteger(x) ? "must be a whole number" : null;
+      if (msg) ctx.issues.push({ code: "custom", message: msg, input: x, path: [k] });
+    }
+    for (const k of textKeys) {
+      const x = v[k] as string | undefined;
+      if (x === undefined) continue;
+      if (x.length === 0) ctx.issues.push({ code: "custom", message: "must not be empty", input: x, path: [k] });
+      else if (x.length > texts[k]) ctx.issues.push({ code: "custom", message: `must be at most ${texts[k]} characters`, input: x, path: [k] });
+    }
+  };
+}
+const n = () => z.number(NUM);
 
-const surfaceIds = z.array(text(100)).min(1).max(1000);
+const openingSchema = z.object({
+  kind: z.enum(["window", "door"]), areaFt2: n(), count: n().optional(),
+  productKey: z.string().optional(), uFactorIP: n().optional(), label: z.string().optional(),
+}).check(boundsCheck({ areaFt2: B.pos(2_000), count: B.int(1, 200), uFactorIP: B.pos(2) }, { productKey: 100, label: 200 }));
+export const surfaceSchema = z.object({
+  id: z.string(), name: z.string(), kind: surfaceKindSchema,
+  orientation: z.enum(["N", "NE", "E", "SE", "S", "SW", "W", "NW", "horizontal"]),
+  grossAreaFt2: n(), assemblyKey: z.string(), heightFt: n().optional(),
+  openings: z.array(openingSchema).max(100).default([]),
+  bufferFactor: n().optional(), blockedBayFraction: n().optional(),
+}).check(boundsCheck({ grossAreaFt2: B.pos(20_000), heightFt: B.pos(100), bufferFactor: B.frac(), blockedBayFraction: B.frac() }, { id: 100, name: 200, assemblyKey: 100 }));
+
+const surfaceIds = z.array(z.string()).min(1).max(1000).check((ctx) => {
+  ctx.value.forEach((id, i) => { if (id.length === 0 || id.length > 100) ctx.issues.push({ code: "custom", message: "must be 1–100 characters", input: id, path: [i] }); });
+});
 export const upgradeSchema = z.discriminatedUnion("type", [
   z.object({ type: z.literal("dense-pack-walls"), name: text().optional(), surfaceIds: z.union([z.literal("all-walls"), surfaceIds]), costUSD: nonneg(1e7), lifeYears: life(), rPerInchIP: pos(10).optional() }),
   z.object({ type: z.literal("attic-insulation"), name: text().optional(), surfaceIds: z.union([z.literal("all-ceilings"), surfaceIds]).default("all-ceilings"), targetRIP: pos(100), costUSD: nonneg(1e7), lifeYears: life() }),

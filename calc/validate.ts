@@ -14,7 +14,8 @@ const LABELS: Record<string, string> = {
   depthIn: "framing depth (in.)", spacingIn: "framing spacing (in.)", hdd65: "heating degree days (65 °F)", costUSD: "cost (USD)",
   pricePerUnitUSD: "fuel price", value: "efficiency", yearBuilt: "year built", bedrooms: "bedrooms", stories: "stories",
   materialKey: "material", assemblyKey: "assembly", productKey: "window or door product", surfaceIds: "surfaces", wmo: "WMO station number",
-  heatingDesignTempF: "heating design temperature (°F)", bagsActual: "bags blown", discountRate: "discount rate", wsf: "weather and shielding factor",
+  heatingDesignTempF: "heating design temperature (°F)", heightFt: "wall height (ft)", count: "number of openings",
+  bufferFactor: "buffer factor", blockedBayFraction: "share of blocked bays", indoorRH: "indoor relative humidity", indoorTempF: "indoor temperature (°F)", bagsActual: "bags blown", discountRate: "discount rate", wsf: "weather and shielding factor",
 };
 
 const BUILT_IN_KEYS = new Set(builtInAssemblies.map((a) => a.key));
