@@ -6,7 +6,7 @@ export const METHOD_NOTES = [
   { topic: "Air leakage", method: "ACH50 = CFM50 × 60 / V; ELA at 4 Pa, n = 0.65; N-factor; ASHRAE basic model", source: "Sherman 1987 (Energy and Buildings 10); ASHRAE HoF basic model coefficients via EnergyPlus I/O Reference" },
   { topic: "Annual heating", method: "Q = 24 × (UA + 1.08 × CFM_nat) × HDD65 × C_D / η", source: "ASHRAE Fundamentals, degree-day method" },
   { topic: "Climate", method: "Station table, auditor-typed climate, or EPW weather file", source: "EnergyPlus .stat files (ASHRAE Climate Design Data 2009); EPW daily means" },
-  { topic: "Economics", method: "Simple payback; SIR with the modified UPV factor (discount rate, fuel escalation)", source: "10 CFR 455.63; 10 CFR 440.21; NIST Handbook 135" },
+  { topic: "Economics", method: "Simple payback = cost / first-year saving; SIR = saving × UPV* / cost, UPV* = (1+e)/(d−e) × [1 − ((1+e)/(1+d))^N]", source: "10 CFR 455.63; 10 CFR 440.21; NIST Handbook 135" },
   { topic: "Dense-pack", method: "Net area × (1 − framing fraction) × depth × density ÷ bag weight", source: "DOE Standard Work Specifications 4.1103.1 (≥ 3.5 lb/ft³)" },
   { topic: "Moisture", method: "Steady-state interface temperatures vs indoor dew point (psychrolib)", source: "ASHRAE Fundamentals psychrometrics; screening check only" },
   { topic: "Ventilation", method: "Q_tot, infiltration credit and fan rate", source: "ASHRAE Standard 62.2-2016 §4.1" },

@@ -8,7 +8,7 @@ describe("SI display conversions through mathjs (checked against NIST SP 811 def
     expect(toSI.uFactor(1)).toBeCloseTo(1 / R_SI_PER_IP, 8); // 5.678 W/m²·K
     expect(toSI.area(1)).toBeCloseTo(0.3048 ** 2, 12);
     expect(toSI.volume(1)).toBeCloseTo(0.3048 ** 3, 12);
-    expect(toSI.temperature(32)).toBe(0);
+    expect(toSI.temperature(32)).toBeCloseTo(0, 10);
     expect(toSI.temperature(212)).toBeCloseTo(100, 12);
     expect(toSI.power(1)).toBeCloseTo(1055.05585262 / 3600, 8);
     expect(toSI.airflow(1)).toBeCloseTo((0.3048 ** 3 * 1000) / 60, 10);
