@@ -102,7 +102,8 @@ export type TriState = "present" | "absent" | "unknown";
 
 export type Hazards = {
   knobAndTube: TriState;
-  vermiculite: boolean;
+  /** Older rows hold a boolean; the assessment writes present / absent / unknown. */
+  vermiculite: boolean | TriState;
   /** Free text per appliance, e.g. "gas furnace (atmospheric)". */
   combustionAppliances: string[];
   leadPaint?: TriState;
@@ -130,6 +131,13 @@ export type UpgradeParams = {
   targetCfm50?: number;
   windowU?: number;
   [extra: string]: unknown;
+};
+
+/** An assembly's layer stack in the calc engine's shape (see calc/assemblies.ts AssemblyDef). */
+export type AssemblyDefinition = {
+  construction: "wood-frame" | "steel-frame" | "masonry";
+  method?: "parallel-path" | "isothermal-planes";
+  layers: Record<string, unknown>[];
 };
 
 export type FuelPrices = Partial<Record<Fuel, number>>;
@@ -376,6 +384,10 @@ export const assemblies = sqliteTable(
     /** Set for a one-off assembly of one house (kept out of the company library). */
     jobId: text("job_id").references(() => jobs.id, { onDelete: "cascade" }),
     builtInKey: text("built_in_key"),
+    /** The calc engine's key for this layer stack (surfaces refer to it); unique within its company or job. */
+    key: text("key"),
+    /** The layer stack as the calc engine reads it (construction, method, layers outside → inside). */
+    definition: text("definition", { mode: "json" }).$type<AssemblyDefinition>(),
     name: text("name").notNull(),
     kind: text("kind", { enum: assemblyKinds }).notNull(),
     framingMaterial: text("framing_material", { enum: framingMaterials }).notNull().default("none"),
@@ -433,6 +445,16 @@ export const surfaces = sqliteTable(
     position: integer("position").notNull().default(0),
     cavityDepthIn: real("cavity_depth_in"),
     blockedBays: integer("blocked_bays").notNull().default(0),
+    /** Key of the existing layer stack: a calc built-in or an assembly of this company or job. */
+    assemblyKey: text("assembly_key"),
+    heightFt: real("height_ft"),
+    /** Fraction of ΔT across a floor or wall to an unheated buffer space (0–1). */
+    bufferFactor: real("buffer_factor"),
+    blockedBayFraction: real("blocked_bay_fraction"),
+    /** Windows and doors: how many of this size, and their product key or whole-unit U-factor. */
+    openingCount: integer("opening_count"),
+    productKey: text("product_key"),
+    uFactorIp: real("u_factor_ip"),
     notes: text("notes"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -495,6 +517,7 @@ export const upgrades = sqliteTable(
     id: id(),
     jobId: jobRef(),
     type: text("type", { enum: upgradeTypes }).notNull(),
+    name: text("name"),
     position: integer("position").notNull().default(0),
     params: text("params", { mode: "json" })
       .$type<UpgradeParams>()

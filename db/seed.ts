@@ -6,6 +6,7 @@ import { hash } from "bcryptjs";
 import { closeDb, databaseUrl, getDb, type Db } from "./index";
 import { isMainModule, migrateDatabase } from "./migrate";
 import * as t from "./schema";
+import { seedDemoAssessmentRows } from "./seed-assessment";
 import { buildScenario, demoAccounts, demoCompanyId, demoHouseId, demoJobId, demoPassword } from "./seed-scenario";
 
 export { demoAccounts, demoPassword, demoCompanyId, demoJobId, demoHouseId, seedId } from "./seed-scenario";
@@ -32,15 +33,10 @@ export async function seedDatabase(db: Db, now: Date = new Date()): Promise<void
   });
 }
 
-/**
- * Hook for the assessment work: the demo house's assemblies, layers, surfaces
- * and upgrades (2x4 walls at 16 in. o.c., plaster on lath, bevel siding over
- * board sheathing, empty cavities except the north wall with fibre wedged
- * half-way down; upgrades: dense-pack walls, air-seal the attic floor, attic
- * insulation). Left empty until the calc material keys exist; use fixed ids
- * (`seedId`) and `onConflictDoNothing()` like the rows above.
- */
-export const seedDemoAssessment: (tx: SeedTx, demo: DemoRefs) => Promise<void> = async () => {};
+/** The demo house's surfaces, openings and upgrades (db/seed-assessment.ts). */
+export async function seedDemoAssessment(tx: SeedTx, demo: DemoRefs): Promise<void> {
+  await seedDemoAssessmentRows(tx, demo);
+}
 
 if (isMainModule(import.meta.url)) {
   (async () => {
