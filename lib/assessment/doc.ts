@@ -42,7 +42,7 @@ export const assessmentDocSchema = z.object({
   heating: hs.heating,
   leakage: z.object({ tests: z.array(leakageTestSchema).max(50), targetCfm50: hs.blowerDoor.shape.cfm50TestIn.nullable().optional() }),
   // Surfaces keep calc's shape plus an id per opening; calc checks every number of them on save.
-  surfaces: z.array(surfaceSchema.safeExtend({ openings: z.array(z.looseObject({ id: z.string().max(100).optional() })).max(100) })).max(1000),
+  surfaces: z.array(z.intersection(surfaceSchema, z.object({ openings: z.array(z.looseObject({ id: z.string().max(100).optional() })).max(100).default([]) }))).max(1000),
   assemblies: z.array(assemblySchema).max(200),
   upgrades: z.array(z.intersection(upgradeSchema, z.object({ id: z.string().min(1).max(100), priceBookItemId: z.string().nullable().optional() }))).max(30),
 });

@@ -104,3 +104,14 @@ describe("who sees what", () => {
     expect([get.status, put.status]).toEqual(expected[actor]);
   });
 });
+
+describe("openings keep their ids across saves", () => {
+  it("so photos and notes attached to a window stay attached", async () => {
+    const { json } = await load();
+    const before = json.doc.surfaces.flatMap((s) => s.openings.map((o) => o.id));
+    expect(before.every(Boolean)).toBe(true);
+    expect((await save(json.version, json.doc)).status).toBe(200);
+    const after = (await load()).json.doc.surfaces.flatMap((s) => s.openings.map((o) => o.id));
+    expect(after).toEqual(before);
+  });
+});
