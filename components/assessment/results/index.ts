@@ -1,0 +1,1 @@
+export { ResultsPanel, type ResultsPanelProps } from "./results-panel";
