@@ -121,7 +121,9 @@ describe("inviting a homeowner", () => {
   });
 
   it("still answers 201 when the mail server is down; the message waits in the outbox as queued", async () => {
-    process.env.SMTP_PORT = "1";
+    const down = await startTestCatcher();
+    await down.close(); // a port where nothing listens any more
+    process.env.SMTP_PORT = String(down.port);
     try {
       const r = await invite(job(1004));
       expect(r.status).toBe(201);
