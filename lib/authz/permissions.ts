@@ -19,6 +19,7 @@ export const permissions = [
   "leakage:write",
   "photos:read",
   "photos:upload",
+  "photos:delete",
   "documents:issue",
   "documents:read",
   "proposals:accept",
@@ -30,7 +31,7 @@ export const permissions = [
 ] as const;
 export type Permission = (typeof permissions)[number];
 
-const staffCommon: Permission[] = ["jobs:list", "jobs:read", "assessment:read", "crewlog:read", "photos:read", "photos:upload"];
+const staffCommon: Permission[] = ["jobs:list", "jobs:read", "assessment:read", "crewlog:read", "photos:read", "photos:upload", "photos:delete"];
 
 const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
   owner: new Set<Permission>([
