@@ -84,3 +84,15 @@ describe.each(matrix)("$name", ({ expect: expected, run }) => {
     expect(await run(actors[actor])).toBe(expected[actor]);
   });
 });
+
+describe("the outbox page's data", () => {
+  it("lists only the user's company's mail, without bodies", async () => {
+    const { listOutbox } = await import("@/lib/data/outbox");
+    const staff = (id: string, companyId: string) => ({ id, companyId, role: "owner" as const, name: "x", email: "x@x.example", unitSystem: "ip" as const });
+    await failedMessage();
+    const mine = await listOutbox(staff(ids.owner, seedId("company:kestrel-bay")));
+    expect(mine.length).toBeGreaterThan(0);
+    expect(mine[0]).not.toHaveProperty("text");
+    expect(await listOutbox(staff(ids.otherOwner, ids.otherCompany))).toEqual([]);
+  });
+});
