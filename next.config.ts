@@ -27,6 +27,8 @@ const securityHeaders = [
 ];
 
 const nextConfig: NextConfig = {
+  // A second build folder lets two people build the same checkout at once (NEXT_DIST_DIR=.next-mine).
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   poweredByHeader: false,
   serverExternalPackages: ["@libsql/client", "libsql", "bcryptjs", "@react-pdf/renderer", "nodemailer"],
   async headers() {

@@ -15,7 +15,7 @@ export function NavLinks({ items }: { items: { href: string; label: string }[] }
               <Link
                 href={item.href}
                 aria-current={active ? "page" : undefined}
-                className={`inline-flex min-h-11 items-center rounded-md px-3 font-semibold ${active ? "bg-spruce-900 text-white" : "text-spruce-50 hover:bg-spruce-800"}`}
+                className={`inline-flex min-h-11 items-center whitespace-nowrap rounded-md px-3 font-semibold ${active ? "bg-spruce-900 text-white" : "text-spruce-50 hover:bg-spruce-800"}`}
               >
                 {item.label}
               </Link>

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { JobTabs } from "@/components/jobs/job-tabs";
 import { StageBadge } from "@/components/jobs/stage-badge";
 import { StageControl } from "@/components/jobs/stage-control";
 import { can } from "@/lib/authz/permissions";
@@ -42,6 +43,7 @@ export default async function JobPage({ params, searchParams }: { params: Promis
         </div>
         <StageBadge stage={job.stage} />
       </div>
+      <JobTabs jobId={job.id} active="overview" />
 
       <div className="mt-6 grid gap-6 lg:grid-cols-3">
         <section className="card lg:col-span-2" aria-labelledby="house-facts">
