@@ -589,6 +589,10 @@ export const crewLogEntries = sqliteTable(
     blockedBays: integer("blocked_bays").notNull().default(0),
     prefilledBays: integer("prefilled_bays").notNull().default(0),
     note: text("note"),
+    /** The wall's state after this entry: true marks it done (the underfill check applies), false reopens it. */
+    finished: integer("finished", { mode: "boolean" }).notNull().default(false),
+    /** How a warning on this wall was dealt with ("found an open chase, sealed and re-blew"). */
+    resolution: text("resolution"),
     loggedAt: integer("logged_at", { mode: "timestamp_ms" }).notNull(),
     createdAt: createdAt(),
   },
