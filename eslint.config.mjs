@@ -5,7 +5,7 @@ const config = [
   ...nextVitals,
   ...nextTs,
   {
-    ignores: [".next/**", "node_modules/**", "data/**", "db/migrations/**", "next-env.d.ts", "test-results/**"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", "data/**", "db/migrations/**", "next-env.d.ts", "test-results/**"],
   },
 ];
 

@@ -2,11 +2,13 @@
 // figures depend on the machine and on what else runs on it, so read them, don't gate on them.
 import { runCalcBench } from "./calc";
 import { runJobsBench } from "./jobs";
+import { runPhotosBench } from "./photos";
 
 const only = process.argv[2];
 const benches: [string, () => Promise<void>][] = [
   ["calc", runCalcBench],
   ["jobs", runJobsBench],
+  ["photos", runPhotosBench],
 ];
 
 console.log(`# Warmstead benchmarks — Node ${process.version}, ${(await import("node:os")).cpus().length} cores`);
