@@ -5,7 +5,7 @@ import { runJobsBench } from "./jobs";
 import { runPhotosBench } from "./photos";
 
 const only = process.argv[2];
-const benches: [string, () => Promise<void>][] = [
+const benches: [string, () => Promise<unknown>][] = [
   ["calc", runCalcBench],
   ["jobs", runJobsBench],
   ["photos", runPhotosBench],
