@@ -4,6 +4,8 @@ const tabs = [
   { key: "overview", label: "Overview", href: (id: string) => `/jobs/${id}` },
   { key: "assessment", label: "Assessment", href: (id: string) => `/jobs/${id}/assessment` },
   { key: "photos", label: "Photos", href: (id: string) => `/jobs/${id}/photos` },
+  { key: "crew", label: "Crew log", href: (id: string) => `/jobs/${id}/crew` },
+  { key: "documents", label: "Documents", href: (id: string) => `/jobs/${id}/documents` },
 ] as const;
 
 export function JobTabs({ jobId, active }: { jobId: string; active: (typeof tabs)[number]["key"] }) {

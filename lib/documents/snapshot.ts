@@ -1,0 +1,62 @@
+// What an issued document freezes: every input, every result, the company's details and the
+// methods and sources used. The on-screen report and the PDF are both drawn from this object.
+import type { HouseAnalysis } from "@/calc";
+import type { AssessmentDoc } from "@/lib/assessment/doc";
+
+export type DocumentKind = "savings-report" | "proposal";
+
+export type ProposalLine = {
+  description: string;
+  quantity: number;
+  unit: string;
+  unitPriceCents: number;
+  totalCents: number;
+  /** False for lines sales tax does not apply to (a permit fee, for instance). */
+  taxable?: boolean;
+  /** Which upgrade the line prices, when it prices one. */
+  upgradeIndex?: number;
+};
+
+export type ProposalTerms = {
+  lines: ProposalLine[];
+  subtotalCents: number;
+  /** Hundredths of a percent: 6.625 % is 662.5 → stored as 662.5 basis points. */
+  taxRateBasisPoints: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+  validUntil: number;
+  terms: string;
+};
+
+export type ReportSnapshot = {
+  kind: DocumentKind;
+  version: number;
+  issuedAt: number;
+  issuedByName: string;
+  company: { name: string; phone: string | null; email: string | null; address: string | null; licenseLine: string | null; insuranceLine: string | null };
+  job: { id: string; number: number; title: string };
+  house: { street: string; city: string; state: string; postalCode: string; yearBuilt: number };
+  client: { name: string };
+  /** "measured" once a test-out reading exists: the report then says the leakage figures are measured. */
+  leakageBasis: "predicted" | "measured";
+  assessment: AssessmentDoc;
+  analysis: HouseAnalysis;
+  proposal?: ProposalTerms;
+  /** Photos chosen for this document; a homeowner may read exactly these. */
+  photoIds: string[];
+};
+
+/** The figures a version list shows side by side. */
+export function headline(s: ReportSnapshot) {
+  const a = s.analysis;
+  return {
+    annualCostBeforeUSD: a.baseline.energy.costUSD,
+    annualCostAfterUSD: a.final.energy.costUSD,
+    yearlySavingUSD: a.package.savings.usd,
+    paybackYears: a.package.simplePaybackYears,
+    cfm50Before: a.baseline.cfm50,
+    cfm50After: a.final.cfm50,
+    totalCents: s.proposal?.totalCents ?? null,
+  };
+}
