@@ -5,6 +5,7 @@ export type NavItem = { href: string; label: string; permission: Permission; mat
 /** The office navigation, as data: each item is shown only to roles holding its permission. */
 export const officeNav: NavItem[] = [
   { href: "/jobs", label: "Jobs", permission: "jobs:list" },
+  { href: "/today", label: "Today", permission: "crewlog:write" },
   { href: "/team", label: "Team", permission: "users:manage" },
   { href: "/price-book", label: "Price book", permission: "prices:read" },
   { href: "/outbox", label: "Outbox", permission: "outbox:read" },

@@ -1,8 +1,8 @@
 import "server-only";
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { cautionsFor, checkWall, DEFAULT_HIGH_RATIO, DEFAULT_LOW_RATIO, type Caution, type CrewStatus, type HouseAnalysis } from "@/calc";
 import { getDb } from "@/db";
-import { crewLogEntries, jobs, jobStageEvents, leakageTests, safetyAcknowledgements, users, type JobStage } from "@/db/schema";
+import { crewLogEntries, houses, jobs, jobStageEvents, leakageTests, safetyAcknowledgements, users, type JobStage } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import { can } from "@/lib/authz/permissions";
@@ -325,3 +325,26 @@ export async function recordTestOut(user: AuthUser, jobId: string, input: TestOu
 }
 
 const sqlIncrement = () => sql`${jobs.version} + 1`;
+
+/** The installer's "Today": their assigned jobs that are approved or installing, with the crew-log progress. */
+export async function listTodayJobs(user: AuthUser) {
+  const db = getDb();
+  const rows = await db
+    .select({ id: jobs.id, number: jobs.number, title: jobs.title, stage: jobs.stage, street: houses.street, city: houses.city, updatedAt: jobs.updatedAt })
+    .from(jobs)
+    .innerJoin(houses, eq(houses.id, jobs.houseId))
+    .where(and(jobScope(db, user), inArray(jobs.stage, ["approved", "installing"])))
+    .orderBy(desc(jobs.stage), asc(jobs.number));
+  const ids = rows.map((r) => r.id);
+  const totals = ids.length
+    ? await db
+        .select({ jobId: crewLogEntries.jobId, bags: sql<number>`coalesce(sum(${crewLogEntries.bagsBlown}), 0)`, entries: sql<number>`count(*)`, last: sql<number | null>`max(${crewLogEntries.loggedAt})` })
+        .from(crewLogEntries)
+        .where(inArray(crewLogEntries.jobId, ids))
+        .groupBy(crewLogEntries.jobId)
+    : [];
+  return rows.map((r) => {
+    const t = totals.find((x) => x.jobId === r.id);
+    return { ...r, bagsLogged: Number(t?.bags ?? 0), entries: Number(t?.entries ?? 0), lastLoggedAt: t?.last ?? null };
+  });
+}
