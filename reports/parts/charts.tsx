@@ -1,0 +1,172 @@
+// Vector charts for the PDF, drawn with React-PDF's own Svg primitives (recharts needs a DOM).
+// Each chart takes plain numbers and draws its labels in the report's body face.
+import type { ComponentType, ReactNode } from "react";
+import { G, Line, Polyline, Rect, Svg, Text, View } from "@react-pdf/renderer";
+import { BODY } from "./fonts";
+import { AFTER, BEFORE, colors } from "./theme";
+import { pdfText } from "./text";
+
+// React-PDF reads fontFamily/fontSize/fontWeight from an Svg Text's props; its types omit them.
+type SvgTextProps = {
+  x: number; y: number; fill?: string; textAnchor?: "start" | "middle" | "end";
+  fontFamily?: string; fontSize?: number; fontWeight?: number; children: ReactNode;
+};
+const SvgTextBase = Text as unknown as ComponentType<SvgTextProps>;
+function Label({ children, size = 8, weight = 400, ...p }: Omit<SvgTextProps, "children" | "fontSize" | "fontWeight" | "fontFamily"> & { children: string; size?: number; weight?: number }) {
+  return <SvgTextBase fontFamily={BODY} fontSize={size} fontWeight={weight} fill={p.fill ?? colors.muted} {...p}>{pdfText(children)}</SvgTextBase>;
+}
+
+/** A round step for an axis: 1, 2 or 5 × 10^n, giving about `count` ticks up to `max`. */
+export function niceStep(max: number, count = 5): number {
+  if (!(max > 0)) return 1;
+  const raw = max / count;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const r = raw / mag;
+  return (r <= 1 ? 1 : r <= 2 ? 2 : r <= 2.5 ? 2.5 : r <= 5 ? 5 : 10) * mag;
+}
+const ticks = (max: number, count = 5) => {
+  const step = niceStep(max, count);
+  const top = Math.ceil(max / step) * step;
+  const out: number[] = [];
+  for (let v = 0; v <= top + step / 2; v += step) out.push(v);
+  return out;
+};
+
+function Legend({ items }: { items: [string, string][] }) {
+  return (
+    <View style={{ flexDirection: "row", gap: 12, marginTop: 4 }}>
+      {items.map(([label, color]) => (
+        <View key={label} style={{ flexDirection: "row", alignItems: "center", gap: 4 }}>
+          <View style={{ width: 9, height: 9, backgroundColor: color, borderRadius: 1.5 }} />
+          <Text style={{ fontSize: 8.5, color: colors.charcoal }}>{pdfText(label)}</Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+export function ChartFrame({ title, caption, children, legend }: { title: string; caption?: string; children: ReactNode; legend?: [string, string][] }) {
+  return (
+    <View wrap={false} style={{ marginBottom: 12 }}>
+      <Text style={{ fontWeight: 700, fontSize: 10.5, color: colors.charcoal, marginBottom: 4 }}>{pdfText(title)}</Text>
+      {children}
+      {legend ? <Legend items={legend} /> : null}
+      {caption ? <Text style={{ fontSize: 8, color: colors.muted, marginTop: 3 }}>{pdfText(caption)}</Text> : null}
+    </View>
+  );
+}
+
+export type PairRow = { label: string; before: number; after: number };
+
+/** Horizontal paired bars (before in ember, after in spruce) with values at the bar ends. */
+export function PairedBars({ rows, width, format, labelWidth = 74 }: { rows: PairRow[]; width: number; format: (v: number) => string; labelWidth?: number }) {
+  const bar = 8;
+  const gap = 1.5;
+  const rowH = bar * 2 + gap + 8;
+  const valueRoom = 58;
+  const plotW = width - labelWidth - valueRoom;
+  const max = Math.max(1, ...rows.flatMap((r) => [r.before, r.after]));
+  const axis = ticks(max, 5);
+  const scaleMax = axis[axis.length - 1];
+  const x = (v: number) => labelWidth + (Math.max(0, v) / scaleMax) * plotW;
+  const height = rows.length * rowH + 16;
+  return (
+    <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
+      {axis.map((t) => (
+        <G key={t}>
+          <Line x1={x(t)} y1={0} x2={x(t)} y2={height - 14} stroke={colors.line} strokeWidth={0.5} />
+          <Label x={x(t)} y={height - 4} textAnchor="middle" size={7}>{format(t)}</Label>
+        </G>
+      ))}
+      {rows.map((r, i) => {
+        const y0 = i * rowH + 4;
+        return (
+          <G key={r.label}>
+            <Label x={labelWidth - 6} y={y0 + bar + 3} textAnchor="end" size={8.5} fill={colors.charcoal}>{r.label}</Label>
+            <Rect x={labelWidth} y={y0} width={Math.max(0.5, x(r.before) - labelWidth)} height={bar} fill={BEFORE} />
+            <Label x={x(r.before) + 3} y={y0 + bar - 1.5} size={7.5}>{format(r.before)}</Label>
+            <Rect x={labelWidth} y={y0 + bar + gap} width={Math.max(0.5, x(r.after) - labelWidth)} height={bar} fill={AFTER} />
+            <Label x={x(r.after) + 3} y={y0 + 2 * bar + gap - 1.5} size={7.5} fill={colors.spruce800} weight={600}>{format(r.after)}</Label>
+          </G>
+        );
+      })}
+      <Line x1={labelWidth} y1={0} x2={labelWidth} y2={height - 14} stroke={colors.charcoal} strokeWidth={0.75} />
+    </Svg>
+  );
+}
+
+export type Column = { label: string; value: number; tone: "before" | "after" | "step" };
+
+/** Vertical columns with the value above each and a (short) label below. */
+export function Columns({ columns, width, height = 150, format }: { columns: Column[]; width: number; height?: number; format: (v: number) => string }) {
+  const top = 16;
+  const bottom = 28;
+  const plotH = height - top - bottom;
+  const max = Math.max(1, ...columns.map((c) => c.value));
+  const slot = width / columns.length;
+  const barW = Math.min(46, slot * 0.6);
+  const fill = (t: Column["tone"]) => (t === "before" ? BEFORE : t === "after" ? AFTER : colors.spruce500);
+  return (
+    <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
+      <Line x1={0} y1={top + plotH} x2={width} y2={top + plotH} stroke={colors.charcoal} strokeWidth={0.75} />
+      {columns.map((c, i) => {
+        const h = (Math.max(0, c.value) / max) * plotH;
+        const cx = slot * i + slot / 2;
+        const words = c.label.split(" ");
+        const half = Math.ceil(words.length / 2);
+        const lines = c.label.length > 14 && words.length > 1 ? [words.slice(0, half).join(" "), words.slice(half).join(" ")] : [c.label];
+        return (
+          <G key={i}>
+            <Rect x={cx - barW / 2} y={top + plotH - h} width={barW} height={Math.max(0.5, h)} fill={fill(c.tone)} />
+            <Label x={cx} y={top + plotH - h - 4} textAnchor="middle" size={8.5} weight={700} fill={c.tone === "before" ? colors.ember700 : colors.spruce800}>{format(c.value)}</Label>
+            {lines.map((l, li) => (
+              <Label key={li} x={cx} y={top + plotH + 11 + li * 9} textAnchor="middle" size={7.5} fill={colors.charcoal}>{l}</Label>
+            ))}
+          </G>
+        );
+      })}
+    </Svg>
+  );
+}
+
+/** Cumulative savings (a rising line) against the plan's cost (a level line), year by year. */
+export function CumulativeChart({ points, cost, width, height = 170, format }: { points: number[]; cost: number; width: number; height?: number; format: (v: number) => string }) {
+  const left = 46;
+  const right = 8;
+  const top = 8;
+  const bottom = 22;
+  const plotW = width - left - right;
+  const plotH = height - top - bottom;
+  const yearsN = Math.max(1, points.length - 1);
+  const axis = ticks(Math.max(cost, ...points), 5);
+  const yMax = axis[axis.length - 1];
+  const x = (yr: number) => left + (yr / yearsN) * plotW;
+  const y = (v: number) => top + plotH - (Math.max(0, v) / yMax) * plotH;
+  const yearStep = yearsN > 20 ? 5 : yearsN > 10 ? 2 : 1;
+  const yearTicks: number[] = [];
+  for (let t = 0; t <= yearsN; t += yearStep) yearTicks.push(t);
+  const cross = points.findIndex((v) => v >= cost && cost > 0);
+  return (
+    <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
+      {axis.map((t) => (
+        <G key={t}>
+          <Line x1={left} y1={y(t)} x2={left + plotW} y2={y(t)} stroke={colors.line} strokeWidth={0.5} />
+          <Label x={left - 4} y={y(t) + 2.5} textAnchor="end" size={7}>{format(t)}</Label>
+        </G>
+      ))}
+      {yearTicks.map((t) => (
+        <Label key={t} x={x(t)} y={top + plotH + 10} textAnchor="middle" size={7}>{String(t)}</Label>
+      ))}
+      <Label x={left + plotW} y={height - 2} textAnchor="end" size={7}>years after the work</Label>
+      <Line x1={left} y1={top + plotH} x2={left + plotW} y2={top + plotH} stroke={colors.charcoal} strokeWidth={0.75} />
+      <Line x1={left} y1={y(cost)} x2={left + plotW} y2={y(cost)} stroke={BEFORE} strokeWidth={1.5} strokeDasharray="4 3" />
+      <Polyline points={points.map((v, i) => `${x(i)},${y(v)}`).join(" ")} stroke={AFTER} strokeWidth={2} fill="none" />
+      {cross > 0 ? (
+        <G>
+          <Line x1={x(cross)} y1={y(cost)} x2={x(cross)} y2={top + plotH} stroke={colors.muted} strokeWidth={0.5} strokeDasharray="2 2" />
+          <Rect x={x(cross) - 2.5} y={y(points[cross]) - 2.5} width={5} height={5} fill={colors.spruce900} />
+        </G>
+      ) : null}
+    </Svg>
+  );
+}
