@@ -36,14 +36,15 @@ describe("each role signs in to its own world", () => {
     await signInAs(page, "auditor@kestrelbay.example");
     await page.waitForURL(/\/jobs$/);
     await expect(page.getByRole("link", { name: "Team" }).count()).resolves.toBe(0);
-    await page.getByLabel("Search").fill("Tansyfield");
+    // Job 1005 (Proposed in the seed) is left alone by the other browser flows.
+    await page.getByLabel("Search").fill("Oriel");
     await page.getByTestId("jobs-count").getByText("1 job").waitFor();
-    await page.getByRole("link", { name: "#1006" }).click();
-    await page.getByRole("heading", { name: /Cold upstairs/ }).waitFor();
-    await page.getByLabel("Move to").selectOption("proposed");
+    await page.getByRole("link", { name: "#1005" }).click();
+    await page.getByRole("heading", { name: /Attic insulation and crawlspace/ }).waitFor();
+    await page.getByLabel("Move to").selectOption("approved");
     await page.getByRole("button", { name: "Change stage" }).click();
-    await page.getByTestId("stage-message").getByText("Moved to Proposed.").waitFor();
-    await page.getByTestId("stage-history").getByText(/Proposed \(from Assessed\) — Tobias Lindqvist-Ayre/).waitFor();
+    await page.getByTestId("stage-message").getByText("Moved to Approved.").waitFor();
+    await page.getByTestId("stage-history").getByText(/Approved \(from Proposed\) — Tobias Lindqvist-Ayre/).waitFor();
     await snap(page, "job-auditor-desktop");
     const team = await page.goto("/team");
     expect(page.url()).toMatch(/\/jobs\?denied=1$/);
