@@ -16,6 +16,7 @@ const docsRoute = await import("@/app/api/jobs/[id]/documents/route");
 const docRoute = await import("@/app/api/documents/[docId]/route");
 const acceptRoute = await import("@/app/api/documents/[docId]/accept/route");
 const assessmentRoute = await import("@/app/api/jobs/[id]/assessment/route");
+const pdfRoute = await import("@/app/api/documents/[docId]/pdf/route");
 const ctx = seededDbForFile();
 
 type Summary = { id: string; version: number; kind: string; contentHash: string; supersededAt: number | null; headline: { yearlySavingUSD: number; totalCents: number | null } };
@@ -140,5 +141,27 @@ describe("who may read and act on documents", () => {
     actAs(ids.homeowner2);
     const r = await call<{ documents: unknown[] }>(docsRoute.GET as never, { params: { id: ids.demoJob } });
     expect(r.json.documents).toEqual([]);
+  });
+});
+
+describe("the PDF route", () => {
+  it("answers application/pdf drawn from the frozen snapshot, for the homeowner of the job only", async () => {
+    const { PDFParse } = await import("pdf-parse");
+    const r = await issue("savings-report");
+    const id = r.json.document.id;
+    actAs(ids.homeowner);
+    const req = new (await import("next/server")).NextRequest(`http://localhost:3000/api/documents/${id}/pdf`, { headers: { host: "localhost:3000" } });
+    const res = await (pdfRoute.GET as never as (q: unknown, c: unknown) => Promise<Response>)(req, { params: Promise.resolve({ docId: id }) });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.headers.get("x-content-hash")).toBe(r.json.document.contentHash);
+    const bytes = Buffer.from(await res.arrayBuffer());
+    expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");
+    const text = (await new PDFParse({ data: bytes }).getText()).text;
+    expect(text).toContain("Kestrel Bay Home Performance");
+    expect(text).toContain("27 Tansyfield Road");
+    actAs(ids.homeowner2);
+    const other = await (pdfRoute.GET as never as (q: unknown, c: unknown) => Promise<Response>)(req, { params: Promise.resolve({ docId: id }) });
+    expect(other.status).toBe(404);
   });
 });
