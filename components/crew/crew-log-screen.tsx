@@ -27,6 +27,14 @@ export function CrewLogScreen({ jobId }: { jobId: string }) {
     return () => window.clearInterval(t);
   }, []);
 
+  const { prune } = q;
+  useEffect(() => {
+    if (!data) return;
+    const logged = new Set(data.walls.flatMap((w) => w.entries.map((e) => e.clientRequestId)).concat(data.otherEntries.map((e) => e.clientRequestId)));
+    const acked = data.safety.mine?.acknowledgedAt ?? 0;
+    prune((r) => (r.kind === "entry" ? logged.has(r.clientRequestId) : acked >= r.queuedAt - 5 * 60_000));
+  }, [data, prune]);
+
   if (!data || now === null) {
     return error ? (
       <p role="alert" className="rounded-md bg-danger-bg px-3 py-2 text-danger">{error.message} <button type="button" className="btn-ghost ml-2" onClick={() => void mutate()}>Try again</button></p>
@@ -38,13 +46,13 @@ export function CrewLogScreen({ jobId }: { jobId: string }) {
   const keys = data.safety.cautions.map((c) => c.id);
   const coversAll = (given: unknown) => Array.isArray(given) && keys.every((k) => given.includes(k));
   const ackedOnServer = data.safety.mine && sameLocalDay(data.safety.mine.acknowledgedAt, now) && coversAll(data.safety.mine.cautionKeys);
-  const ackedOnPhone = q.queue.some((r) => r.kind === "safety-ack" && r.state === "pending" && sameLocalDay(r.queuedAt, now) && coversAll(r.body.cautionKeys));
+  const ackedOnPhone = q.queue.some((r) => r.kind === "safety-ack" && r.state !== "rejected" && sameLocalDay(r.queuedAt, now) && coversAll(r.body.cautionKeys));
   const needsSafety = data.canWrite && !ackedOnServer && !ackedOnPhone;
 
   const pendingCount = q.pending.length;
   return (
     <div className="space-y-4">
-      {data.canWrite ? (
+      {data.canWrite && (!needsSafety || pendingCount > 0) ? (
         <div className={`flex flex-wrap items-center justify-between gap-2 rounded-md px-3 py-2 ${pendingCount ? "bg-warn-bg text-warn" : "bg-spruce-50 text-spruce-800"}`} role="status" data-testid="sync-status">
           <span className="font-semibold">
             {pendingCount
@@ -54,7 +62,7 @@ export function CrewLogScreen({ jobId }: { jobId: string }) {
           {pendingCount ? <button type="button" className="btn-ghost min-h-12" onClick={() => void q.retry()} disabled={q.sending}>Retry now</button> : null}
           {q.lastError && pendingCount ? <span className="w-full text-sm">{q.lastError}</span> : null}
         </div>
-      ) : (
+      ) : data.canWrite ? null : (
         <p className="rounded-md bg-spruce-50 px-3 py-2 text-spruce-800" role="status">Read-only for the office; updates every few seconds as the crew logs.</p>
       )}
 
@@ -68,7 +76,7 @@ export function CrewLogScreen({ jobId }: { jobId: string }) {
         <>
           {data.walls.length === 0 && !data.issues.length ? <p className="text-ink-muted">This job has no walls in a dense-pack upgrade.</p> : null}
           {data.walls.map((w) => (
-            <WallCard key={w.surfaceId} jobId={jobId} wall={w} thresholds={data.thresholds} queued={q.queue} canWrite={data.canWrite} onSave={(body) => q.enqueue("entry", `/api/jobs/${jobId}/crew-log`, body)} />
+            <WallCard key={w.surfaceId} jobId={jobId} wall={w} thresholds={data.thresholds} queued={q.queue} canWrite={data.canWrite} onSave={(body) => q.enqueue("entry", `/api/jobs/${jobId}/crew-log`, body)} onDiscard={q.discard} />
           ))}
           {!data.canWrite ? <CrewSummary log={data} /> : null}
           <TestOutResultPanel result={data.testOut} />

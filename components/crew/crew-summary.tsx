@@ -22,7 +22,7 @@ export function CrewSummary({ log }: { log: CrewLogView }) {
                 <td className="py-1 pr-2">{w.name}{w.finished ? " ✓" : ""}</td>
                 <td className="py-1 pr-2 text-right tabular-nums">{bagsText(w.loggedBags)}</td>
                 <td className="py-1 pr-2 text-right tabular-nums">{bagsText(w.expectedBags)}</td>
-                <td className={`py-1 ${w.status === "possible-bypass" || (w.finished && w.status === "possible-voids-or-low-density") ? "font-semibold text-danger" : ""}`}>{w.ratio !== null ? `${w.ratio.toFixed(2)}× ` : ""}{statusText[w.status]}</td>
+                <td className={`py-1 ${w.status === "possible-bypass" || (w.finished && w.status === "possible-voids-or-low-density") ? "font-semibold text-danger" : ""}`}>{w.loggedBags === 0 && !w.finished ? "not started" : <>{w.ratio !== null ? `${w.ratio.toFixed(2)}× ` : ""}{w.status === "possible-voids-or-low-density" && !w.finished ? "in progress" : statusText[w.status]}</>}</td>
               </tr>
             ))}
           </tbody>

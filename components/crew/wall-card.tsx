@@ -43,9 +43,10 @@ type Props = {
   queued: QueuedRequest[];
   canWrite: boolean;
   onSave?: (body: Record<string, unknown>) => void;
+  onDiscard?: (clientRequestId: string) => void;
 };
 
-export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave }: Props) {
+export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave, onDiscard }: Props) {
   const [draft, setDraft] = useState<Draft>(emptyDraft);
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   useEffect(() => {
@@ -67,9 +68,11 @@ export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave }: 
   const mine = queued.filter((q) => q.kind === "entry" && q.body.surfaceId === wall.surfaceId);
   const pending = mine.filter((q) => q.state === "pending");
   const rejected = mine.filter((q) => q.state === "rejected");
-  const pendingBags = pending.reduce((a, q) => a + Number(q.body.bagsBlown ?? 0), 0);
-  const pendingHoles = pending.reduce((a, q) => a + Number(q.body.holesDrilled ?? 0), 0);
-  const lastPendingFinished = pending.length ? Boolean(pending[pending.length - 1]!.body.finished) : null;
+  // Sent but not yet in the log read back: still counted, so the tally never dips.
+  const inFlight = mine.filter((q) => q.state !== "rejected" && !wall.entries.some((e) => e.clientRequestId === q.clientRequestId));
+  const pendingBags = inFlight.reduce((a, q) => a + Number(q.body.bagsBlown ?? 0), 0);
+  const pendingHoles = inFlight.reduce((a, q) => a + Number(q.body.holesDrilled ?? 0), 0);
+  const lastPendingFinished = inFlight.length ? Boolean(inFlight[inFlight.length - 1]!.body.finished) : null;
 
   // Logged on the server plus what waits on this phone: the tally the crew is actually at.
   const bags = Math.round((wall.logged.bags + pendingBags) * 100) / 100;
@@ -113,7 +116,7 @@ export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave }: 
     <section className="rounded-lg border border-line bg-white p-4 shadow-sm" aria-labelledby={`wall-${wall.surfaceId}`} data-testid="wall-card" data-wall={wall.name}>
       <div className="flex items-start justify-between gap-3">
         <h2 id={`wall-${wall.surfaceId}`} className="text-xl font-bold text-spruce-900">{wall.name}</h2>
-        {finished ? <span className="rounded-full bg-spruce-700 px-3 py-1 text-sm font-semibold text-white">Finished</span> : <span className="rounded-full bg-ember-100 px-3 py-1 text-sm font-semibold text-ember-700">In progress</span>}
+        {finished ? <span className="rounded-full bg-spruce-700 px-3 py-1 text-sm font-semibold text-white">Finished</span> : bags === 0 && wall.entries.length === 0 && inFlight.length === 0 ? <span className="rounded-full bg-paper-deep px-3 py-1 text-sm font-semibold text-charcoal">Not started</span> : <span className="rounded-full bg-ember-100 px-3 py-1 text-sm font-semibold text-ember-700">In progress</span>}
       </div>
       <p className="mt-1 text-ink-muted">
         Expected about <strong className="text-charcoal">{bagsText(wall.expected.bags)} bags</strong> · {intText(wall.expected.holes)} holes · {intText(wall.expected.bays)} bays
@@ -197,16 +200,17 @@ export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave }: 
       ) : null}
 
       {rejected.map((r) => (
-        <p key={r.clientRequestId} role="alert" className="mt-3 rounded-md bg-danger-bg px-3 py-2 text-danger">
-          An entry was refused: {Object.values(r.fields ?? {}).flat().join(" ") || r.error}
-        </p>
+        <div key={r.clientRequestId} role="alert" className="mt-3 rounded-md bg-danger-bg px-3 py-2 text-danger">
+          <p>An entry of {bagsText(Number(r.body.bagsBlown ?? 0))} bags was refused: {Object.values(r.fields ?? {}).flat().join(" ") || r.error}</p>
+          <button type="button" className="btn-ghost mt-2 min-h-12" onClick={() => onDiscard?.(r.clientRequestId)}>Dismiss</button>
+        </div>
       ))}
 
       <details className="mt-4" open={!canWrite}>
-        <summary className="min-h-11 cursor-pointer py-2 font-semibold text-spruce-800">Entries ({wall.entries.length + pending.length})</summary>
+        <summary className="min-h-11 cursor-pointer py-2 font-semibold text-spruce-800">Entries ({wall.entries.length + inFlight.length})</summary>
         <ol className="mt-2 space-y-2" data-testid="wall-entries">
           {wall.entries.map((e) => (
-            <li key={e.id} className="rounded-md border border-line px-3 py-2 text-sm">
+            <li key={e.id} className="rounded-md border border-line px-3 py-2 text-sm" data-testid="logged-entry">
               <span className="font-semibold">{bagsText(e.bagsBlown)} bags · {e.holesDrilled} holes</span>
               {e.blockedBays ? ` · ${e.blockedBays} blocked` : ""}
               {e.prefilledBays ? ` · ${e.prefilledBays} pre-filled` : ""}
@@ -216,12 +220,19 @@ export function WallCard({ jobId, wall, thresholds, queued, canWrite, onSave }: 
               {e.resolution ? <span className="block"><strong>Resolution:</strong> {e.resolution}</span> : null}
             </li>
           ))}
-          {pending.map((q) => (
-            <li key={q.clientRequestId} className="rounded-md border-2 border-dashed border-warn bg-warn-bg px-3 py-2 text-sm" data-testid="pending-entry">
-              <span className="font-semibold">{bagsText(Number(q.body.bagsBlown ?? 0))} bags · {Number(q.body.holesDrilled ?? 0)} holes</span>
-              <span className="block font-semibold text-warn">Pending — kept on this phone, not sent yet ({whenText(q.queuedAt)})</span>
-            </li>
-          ))}
+          {inFlight.map((q) =>
+            q.state === "pending" ? (
+              <li key={q.clientRequestId} className="rounded-md border-2 border-dashed border-warn bg-warn-bg px-3 py-2 text-sm" data-testid="pending-entry">
+                <span className="font-semibold">{bagsText(Number(q.body.bagsBlown ?? 0))} bags · {Number(q.body.holesDrilled ?? 0)} holes</span>
+                <span className="block font-semibold text-warn">Pending — kept on this phone, not sent yet ({whenText(q.queuedAt)})</span>
+              </li>
+            ) : (
+              <li key={q.clientRequestId} className="rounded-md border border-line px-3 py-2 text-sm">
+                <span className="font-semibold">{bagsText(Number(q.body.bagsBlown ?? 0))} bags · {Number(q.body.holesDrilled ?? 0)} holes</span>
+                <span className="block text-ink-muted">Saved — refreshing the list</span>
+              </li>
+            ),
+          )}
         </ol>
       </details>
     </section>

@@ -14,7 +14,7 @@ export function JobTabs({ jobId, active }: { jobId: string; active: (typeof tabs
       <ul className="flex gap-1 overflow-x-auto">
         {tabs.map((t) => (
           <li key={t.key}>
-            <Link href={t.href(jobId)} aria-current={t.key === active ? "page" : undefined} className={`inline-flex min-h-11 items-center border-b-4 px-4 font-semibold ${t.key === active ? "border-ember-500 text-spruce-900" : "border-transparent text-ink-muted hover:text-spruce-800"}`}>
+            <Link href={t.href(jobId)} aria-current={t.key === active ? "page" : undefined} className={`inline-flex min-h-11 items-center whitespace-nowrap border-b-4 px-4 font-semibold ${t.key === active ? "border-ember-500 text-spruce-900" : "border-transparent text-ink-muted hover:text-spruce-800"}`}>
               {t.label}
             </Link>
           </li>

@@ -19,8 +19,11 @@ export type QueuedRequest = {
   url: string;
   body: Record<string, unknown>;
   queuedAt: number;
-  /** pending: not yet accepted by the server; rejected: the server refused it (kept until discarded). */
-  state: "pending" | "rejected";
+  /**
+   * pending: not yet accepted by the server; sent: accepted, kept until the crew log read back
+   * contains it (so the tally never dips while the list refreshes); rejected: refused, kept to show why.
+   */
+  state: "pending" | "sent" | "rejected";
   error?: string;
   fields?: Record<string, string[]>;
 };
@@ -88,9 +91,8 @@ export function useCrewQueue(jobId: string, onSent: () => Promise<unknown>) {
           await sendJson(next.url, "POST", next.body);
           sent = true;
           setLastError(null);
-          // Fresh totals first, then drop the pending copy, so the tally never dips in between.
-          await onSentRef.current().catch(() => undefined);
-          update((q) => q.filter((r) => r.clientRequestId !== next.clientRequestId));
+          update((q) => q.map((r) => (r.clientRequestId === next.clientRequestId ? { ...r, state: "sent" } : r)));
+          void onSentRef.current().catch(() => undefined);
         } catch (err) {
           if (isRefusal(err)) {
             const e = err as FetchError;
@@ -141,7 +143,16 @@ export function useCrewQueue(jobId: string, onSent: () => Promise<unknown>) {
     [flush, update],
   );
 
+  /** Drops the sent requests the server's answer now shows (and any sent more than 10 minutes ago). */
+  const prune = useCallback(
+    (confirmed: (r: QueuedRequest) => boolean) => {
+      const stale = Date.now() - 10 * 60_000;
+      if (readQueue(jobId).some((r) => r.state === "sent" && (confirmed(r) || r.queuedAt < stale))) update((q) => q.filter((r) => !(r.state === "sent" && (confirmed(r) || r.queuedAt < stale))));
+    },
+    [jobId, update],
+  );
+
   const discard = useCallback((clientRequestId: string) => update((q) => q.filter((r) => r.clientRequestId !== clientRequestId)), [update]);
 
-  return { queue, pending: queue.filter((r) => r.state === "pending"), rejected: queue.filter((r) => r.state === "rejected"), sending, online, lastError, enqueue, retry: flush, discard };
+  return { queue, pending: queue.filter((r) => r.state === "pending"), rejected: queue.filter((r) => r.state === "rejected"), sending, online, lastError, enqueue, retry: flush, discard, prune };
 }

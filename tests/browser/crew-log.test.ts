@@ -63,8 +63,8 @@ describe("crew log on a phone", () => {
     // Wall A: typed, a decimal, over 1.3× expected → the overfill warning appears at once.
     const wallA = page.locator(`[data-testid="wall-card"][data-wall="${a.name}"]`);
     const overBags = Math.ceil(a.expected.bags * 1.4 * 2) / 2;
-    await wallA.getByLabel("Bags blown (this entry)").fill(String(overBags));
-    await wallA.getByLabel("Holes drilled (this entry)").fill("30");
+    await wallA.getByLabel("Bags blown (this entry)", { exact: true }).fill(String(overBags));
+    await wallA.getByLabel("Holes drilled (this entry)", { exact: true }).fill("30");
     await wallA.getByTestId("preview-warning").waitFor();
     await wallA.getByRole("button", { name: `Save entry for ${a.name}` }).click();
     await wallA.getByTestId("overfill-warning").waitFor();
@@ -79,9 +79,10 @@ describe("crew log on a phone", () => {
     for (let i = 0; i < 3; i++) await wallB.getByRole("button", { name: "Bags blown (this entry) plus 1" }).click();
     await wallB.getByRole("button", { name: "Bags blown (this entry) plus 0.5" }).click();
     for (let i = 0; i < 2; i++) await wallB.getByRole("button", { name: "Holes drilled (this entry) plus 5" }).click();
-    await expect(wallB.getByLabel("Bags blown (this entry)").inputValue()).resolves.toBe("3.5");
+    await expect(wallB.getByLabel("Bags blown (this entry)", { exact: true }).inputValue()).resolves.toBe("3.5");
     await wallB.getByRole("button", { name: `Save entry for ${b.name}` }).click();
     await expect.poll(() => wallB.getByTestId("tally-bags").textContent()).toBe("3.5");
+    await expect.poll(() => wallB.getByTestId("logged-entry").count()).toBe(1); // read back from the server
 
     // A dropped connection: the entry stays on the phone as pending, and goes by itself when back online.
     await context.setOffline(true);
@@ -99,7 +100,7 @@ describe("crew log on a phone", () => {
     // A failing server: the entry survives a reload and goes with the retry button.
     await page.route("**/api/jobs/*/crew-log", (route) => (route.request().method() === "POST" ? route.fulfill({ status: 503, body: "{}" }) : route.fallback()));
     const rest = Math.round((b.expected.bags - 4.5) * 100) / 100;
-    await wallB.getByLabel("Bags blown (this entry)").fill(String(rest));
+    await wallB.getByLabel("Bags blown (this entry)", { exact: true }).fill(String(rest));
     await wallB.getByText("Wall finished").click();
     await wallB.getByRole("button", { name: `Save entry for ${b.name}` }).click();
     await page.getByTestId("sync-status").getByText(/1 entry pending on this phone/).waitFor();
