@@ -325,8 +325,9 @@ function How({ snapshot: sn }: { snapshot: ReportSnapshot }) {
       <View wrap={false}>
         <Heading>How we calculated this</Heading>
         <Text style={s.h3}>Inputs</Text>
-        <Facts items={inputs} labelWidth={26} />
+        <Facts items={inputs.slice(0, 4)} labelWidth={26} />
       </View>
+      <Facts items={inputs.slice(4)} labelWidth={26} />
       <Text style={s.h3} minPresenceAhead={40}>Climate data</Text>
       <P style={s.small}>{`${a.climate.degreeDaySource}. ${a.climate.designSource}.`}</P>
       {a.warnings.length > 0 ? (

@@ -2,7 +2,7 @@
 // page count, carry the headline figures as the screen formats them, the company name and
 // "Page N of M" on every page, only glyphs the shipped fonts have, and turn into PNG pages.
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, rmSync, statSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from "node:fs";
 import { createRequire } from "node:module";
 import { writeFile } from "node:fs/promises";
 import os from "node:os";
@@ -12,6 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as f from "@/components/assessment/results/format";
 import { headline, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { formatDollars } from "@/lib/money";
+import { fontFile, woffToSfnt } from "@/reports/parts/fonts";
 import { renderSnapshotPdf } from "@/reports/render";
 import { demoSnapshot } from "@/tests/support/demo-snapshot";
 
@@ -66,11 +67,13 @@ function expectFrames(p: Parsed, company: string) {
   }
 }
 
+// fontkit (React-PDF's own font reader) ships no types; only these members are used.
+type FkFont = { hasGlyphForCodePoint(c: number): boolean; numGlyphs: number; characterSet: number[]; postscriptName: string; type: string };
+const fontkit = createRequire(import.meta.url)("fontkit") as { openSync(p: string): FkFont; create(b: Uint8Array): FkFont };
+
 // Every character the PDF draws is one the latin subset of the shipped fonts carries.
 function expectGlyphsInFonts(text: string) {
-  // fontkit (React-PDF's own font reader) ships no types; only openSync and hasGlyphForCodePoint are used.
-  const fontkit = createRequire(import.meta.url)("fontkit") as { openSync(p: string): { hasGlyphForCodePoint(c: number): boolean } };
-  const open = (file: string) => fontkit.openSync(path.join(process.cwd(), "fonts", file));
+  const open = (file: string) => fontkit.openSync(fontFile(file));
   const body = open("source-sans-3-latin-400-normal.woff");
   const display = open("fraunces-latin-700-normal.woff");
   const missing = new Set<string>();
@@ -82,6 +85,20 @@ function expectGlyphsInFonts(text: string) {
   expect([...missing]).toEqual([]);
   for (const ch of ["\u2212", "\u2248", "\u2264", "\u2265", "\u0394", "\u2192"]) expect(text).not.toContain(ch);
 }
+
+describe("report fonts", () => {
+  it("unpacks each shipped WOFF into the same font as a plain sfnt", () => {
+    for (const name of ["source-sans-3-latin-400-normal.woff", "source-sans-3-latin-700-normal.woff", "fraunces-latin-600-normal.woff"]) {
+      const woff = fontkit.openSync(fontFile(name));
+      const sfnt = fontkit.create(new Uint8Array(woffToSfnt(readFileSync(fontFile(name)))));
+      expect(woff.type).toBe("WOFF");
+      expect(sfnt.type).toBe("TTF");
+      expect(sfnt.postscriptName).toBe(woff.postscriptName);
+      expect(sfnt.numGlyphs).toBe(woff.numGlyphs);
+      expect(sfnt.characterSet).toEqual(woff.characterSet);
+    }
+  });
+});
 
 describe("savings report PDF", () => {
   const snap = demoSnapshot("savings-report");
