@@ -2,6 +2,7 @@
 // figures depend on the machine and on what else runs on it, so read them, don't gate on them.
 import { runCalcBench } from "./calc";
 import { runJobsBench } from "./jobs";
+import { runPdfBench } from "./pdf";
 import { runPhotosBench } from "./photos";
 
 const only = process.argv[2];
@@ -9,6 +10,7 @@ const benches: [string, () => Promise<unknown>][] = [
   ["calc", runCalcBench],
   ["jobs", runJobsBench],
   ["photos", runPhotosBench],
+  ["pdf", runPdfBench],
 ];
 
 console.log(`# Warmstead benchmarks — Node ${process.version}, ${(await import("node:os")).cpus().length} cores`);
