@@ -31,17 +31,9 @@ export type Role = (typeof roles)[number];
 export const unitSystems = ["ip", "si"] as const;
 export type UnitSystem = (typeof unitSystems)[number];
 
-export const jobStages = ["intake", "assessed", "proposed", "approved", "installing", "verified", "closed"] as const;
-export type JobStage = (typeof jobStages)[number];
-export const jobStageLabels: Record<JobStage, string> = {
-  intake: "Intake",
-  assessed: "Assessed",
-  proposed: "Proposed",
-  approved: "Approved",
-  installing: "Installing",
-  verified: "Verified",
-  closed: "Closed",
-};
+// One list of stages for the database, the API and the screens.
+export { jobStageLabels, jobStages, type JobStage } from "../lib/stages";
+import { jobStages } from "../lib/stages";
 
 export const foundations = ["basement", "crawlspace", "slab", "other"] as const;
 export type Foundation = (typeof foundations)[number];

@@ -1,8 +1,6 @@
 // The savings report and proposal end to end: the auditor issues them and sends the link; the
 // homeowner opens it from the captured e-mail, sets a password, reads the report, downloads the
 // PDF and accepts the proposal; the office then sees the job Approved.
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import bcrypt from "bcryptjs";
 import { eq } from "drizzle-orm";
 import type { Browser } from "playwright-core";
@@ -11,6 +9,7 @@ import { createDb } from "@/db";
 import { users } from "@/db/schema";
 import { seedId } from "@/db/seed-scenario";
 import { DEMO_PASSWORD, launch, newPage, signInAs, snap } from "./support/browser";
+import { linkFromMail, mailFiles } from "./support/mail";
 
 const HOMEOWNER = "homeowner@kestrelbay.example";
 let browser: Browser;
@@ -23,20 +22,6 @@ afterAll(async () => {
   await db.update(users).set({ passwordHash: await bcrypt.hash(DEMO_PASSWORD, 10) }).where(eq(users.email, HOMEOWNER));
   db.$client.close();
 });
-
-const decodeQp = (s: string) => Buffer.from(s.replace(/=\r?\n/g, "").replace(/=([0-9A-F]{2})/gi, (_, h: string) => String.fromCharCode(parseInt(h, 16))), "latin1").toString("utf8");
-const mailFiles = () => new Set(readdirSync(inject("mailDir")).filter((f) => f.endsWith(".eml")));
-async function linkFromMail(to: string, before: Set<string>) {
-  for (let i = 0; i < 75; i++) {
-    for (const f of [...mailFiles()].filter((n) => !before.has(n))) {
-      const raw = readFileSync(path.join(inject("mailDir"), f), "utf8");
-      const m = raw.toLowerCase().includes(`to: ${to}`) && decodeQp(raw).match(/http:\/\/127\.0\.0\.1:\d+\/welcome\/[A-Za-z0-9_-]{43}/);
-      if (m) return m[0];
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error("no welcome link arrived");
-}
 
 describe("savings report and proposal", () => {
   it("issued by the auditor, read, downloaded and accepted by the homeowner, seen Approved by the office", async () => {
@@ -53,7 +38,7 @@ describe("savings report and proposal", () => {
     await staff.page.getByTestId("documents-message").getByText(/Link sent to homeowner@kestrelbay.example/).waitFor();
     await snap(staff.page, "documents-staff-desktop");
 
-    const link = await linkFromMail(HOMEOWNER, before);
+    const link = await linkFromMail(HOMEOWNER, /http:\/\/127\.0\.0\.1:\d+\/welcome\/[A-Za-z0-9_-]{43}/, before);
     const { page, context } = await newPage(browser, "phone");
     await page.goto(link);
     await page.getByLabel("New password").fill("report-reader-2026");

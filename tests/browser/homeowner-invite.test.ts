@@ -1,8 +1,6 @@
 // The auditor invites the homeowner of job 1006; the homeowner opens the link from the captured
 // e-mail, sets a password, lands in the portal, and signs in again with it. Then the e-mailed
 // sign-in link, a used link, and the outbox as staff see it.
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import bcrypt from "bcryptjs";
 import { eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
@@ -11,6 +9,7 @@ import { createDb } from "@/db";
 import { users } from "@/db/schema";
 import { seedId } from "@/db/seed-scenario";
 import { DEMO_PASSWORD, launch, newPage, signInAs, snap } from "./support/browser";
+import { linkFromMail, mailFiles } from "./support/mail";
 
 const HOMEOWNER = "homeowner@kestrelbay.example";
 const NEW_PASSWORD = "tansyfield-cold-upstairs";
@@ -26,25 +25,6 @@ afterAll(async () => {
   await db.update(users).set({ passwordHash: await bcrypt.hash(DEMO_PASSWORD, 10) }).where(eq(users.email, HOMEOWNER));
   db.$client.close();
 });
-
-const decodeQp = (s: string) => Buffer.from(s.replace(/=\r?\n/g, "").replace(/=([0-9A-F]{2})/gi, (_, h: string) => String.fromCharCode(parseInt(h, 16))), "latin1").toString("utf8");
-
-const mailFiles = () => new Set(readdirSync(inject("mailDir")).filter((f) => f.endsWith(".eml")));
-
-/** The link matching `pattern` in a captured .eml to `to` that was not among `before`, waiting for it. */
-async function linkFromMail(to: string, pattern: RegExp, before: Set<string>): Promise<string> {
-  const start = Date.now();
-  while (Date.now() - start < 15_000) {
-    for (const f of [...mailFiles()].filter((name) => !before.has(name))) {
-      const raw = readFileSync(path.join(inject("mailDir"), f), "utf8");
-      if (!raw.toLowerCase().includes(`to: ${to}`)) continue;
-      const m = decodeQp(raw).match(pattern);
-      if (m) return m[0];
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`no new mail to ${to} matching ${pattern}`);
-}
 
 async function signOut(page: Page) {
   await page.getByRole("button", { name: "Sign out" }).click();
