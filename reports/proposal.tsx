@@ -114,14 +114,14 @@ function ProposalBody({ snapshot: sn }: { snapshot: ReportSnapshot }) {
 }
 
 /** Proposal pages, then the savings report pages (from `report` when given, else the proposal's own snapshot). */
-export function ProposalDocument({ snapshot, report }: { snapshot: ReportSnapshot; report?: ReportSnapshot }) {
+export function ProposalDocument({ snapshot, report, images }: { snapshot: ReportSnapshot; report?: ReportSnapshot; images?: Record<string, Buffer> }) {
   registerFonts();
   return (
     <Document title={t.pdfText(`${TITLE}, ${addressLine(snapshot)}`)} author={t.pdfText(snapshot.company.name)} subject={`Version ${snapshot.version}`} creator="Warmstead" producer="Warmstead" language="en-US">
       <ReportPage companyName={snapshot.company.name} documentTitle={`${TITLE} · ${snapshot.client.name} · ${addressLine(snapshot)}`}>
         <ProposalBody snapshot={snapshot} />
       </ReportPage>
-      <SavingsReportPages snapshot={report ?? snapshot} />
+      <SavingsReportPages snapshot={report ?? snapshot} images={images} />
     </Document>
   );
 }

@@ -6,8 +6,10 @@ import type { HouseEvaluation } from "@/calc/analyze";
 import type { ReportSnapshot } from "@/lib/documents/snapshot";
 import { BigFigure, Facts, Heading, P, Table } from "./parts/blocks";
 import { ChartFrame, Columns, CumulativeChart, PairedBars } from "./parts/charts";
+import { CrewSection } from "./parts/crew";
 import { registerFonts } from "./parts/fonts";
 import { ReportPage } from "./parts/page";
+import { PhotosSection } from "./parts/photos";
 import * as t from "./parts/text";
 import { colors, s } from "./parts/theme";
 
@@ -355,8 +357,9 @@ function How({ snapshot: sn }: { snapshot: ReportSnapshot }) {
 }
 
 /** The savings report's pages, for its own document or appended to a proposal. */
-export function SavingsReportPages({ snapshot }: { snapshot: ReportSnapshot }) {
+export function SavingsReportPages({ snapshot, images = {} }: { snapshot: ReportSnapshot; images?: Record<string, Buffer> }) {
   registerFonts();
+  const dp = snapshot.analysis.input.densePack;
   const frame = { companyName: snapshot.company.name, documentTitle: `${TITLE} · ${snapshot.client.name} · ${addressLine(snapshot)}` };
   return (
     <>
@@ -367,20 +370,26 @@ export function SavingsReportPages({ snapshot }: { snapshot: ReportSnapshot }) {
         <Charts snapshot={snapshot} />
       </ReportPage>
       <ReportPage {...frame}>
+        {snapshot.crewSummary ? <CrewSection crew={snapshot.crewSummary} thresholds={{ high: dp.highRatio, low: dp.lowRatio }} /> : null}
         <Upgrades snapshot={snapshot} />
         <MoistureVentilation snapshot={snapshot} />
         <Cautions snapshot={snapshot} />
         <How snapshot={snapshot} />
       </ReportPage>
+      {snapshot.photos?.length ? (
+        <ReportPage {...frame}>
+          <PhotosSection photos={snapshot.photos} images={images} />
+        </ReportPage>
+      ) : null}
     </>
   );
 }
 
-export function SavingsReportDocument({ snapshot }: { snapshot: ReportSnapshot }) {
+export function SavingsReportDocument({ snapshot, images }: { snapshot: ReportSnapshot; images?: Record<string, Buffer> }) {
   registerFonts();
   return (
     <Document title={t.pdfText(`${TITLE}, ${addressLine(snapshot)}`)} author={t.pdfText(snapshot.company.name)} subject={`Version ${snapshot.version}`} creator="Warmstead" producer="Warmstead" language="en-US">
-      <SavingsReportPages snapshot={snapshot} />
+      <SavingsReportPages snapshot={snapshot} images={images} />
     </Document>
   );
 }

@@ -11,6 +11,7 @@ import { headline, type DocumentKind, type ReportSnapshot } from "@/lib/document
 import { queueMail } from "@/lib/mail/outbox";
 import { logActivity } from "./activity";
 import { analyzeDoc, loadAssessment } from "./assessment";
+import { documentExtras } from "./document-extras";
 import { jobScope } from "./scope";
 
 const DAY = 86_400_000;
@@ -32,6 +33,7 @@ export async function issueDocument(user: AuthUser, jobId: string, kind: Documen
     .from(jobs).innerJoin(houses, eq(houses.id, jobs.houseId)).innerJoin(clients, eq(clients.id, jobs.clientId)).innerJoin(companies, eq(companies.id, jobs.companyId))
     .where(and(eq(jobs.id, jobId), jobScope(db, user)));
   if (!row) throw notFound("Job");
+  const extras = await documentExtras(user, jobId, photoIds);
   const now = Date.now();
   const c = row.company;
   let proposal: ReportSnapshot["proposal"];
@@ -56,7 +58,7 @@ export async function issueDocument(user: AuthUser, jobId: string, kind: Documen
       house: { street: row.house.street, city: row.house.city, state: row.house.state, postalCode: row.house.postalCode, yearBuilt: row.house.yearBuilt },
       client: { name: row.client.name },
       leakageBasis: latestTest(doc, "test-out") ? "measured" : "predicted",
-      assessment: doc, analysis, proposal, photoIds,
+      assessment: doc, analysis, proposal, ...extras,
     };
     await tx.update(issuedDocuments).set({ supersededAt: new Date(now) }).where(and(eq(issuedDocuments.jobId, jobId), eq(issuedDocuments.kind, kind), isNull(issuedDocuments.supersededAt)));
     const [created] = await tx

@@ -45,6 +45,34 @@ export type ReportSnapshot = {
   proposal?: ProposalTerms;
   /** Photos chosen for this document; a homeowner may read exactly these. */
   photoIds: string[];
+  /** What the report shows beside each photo in `photoIds`, frozen at issue (older snapshots lack it). */
+  photos?: SnapshotPhoto[];
+  /** The crew log as it stood at issue, when the job had entries (older snapshots lack it). */
+  crewSummary?: CrewSummarySnapshot;
+};
+
+export type SnapshotPhoto = {
+  id: string;
+  tag: "before" | "during" | "after" | "thermal";
+  caption: string | null;
+  surfaceId: string | null;
+  surfaceLabel: string | null;
+  takenAt: number | null;
+  width: number | null;
+  height: number | null;
+};
+
+/** The crew log's summary frozen into a report: bags, warnings and how they ended, test-out. */
+export type CrewSummarySnapshot = {
+  entries: number;
+  bags: { expected: number; logged: number; ratio: number | null };
+  holes: { expected: number; logged: number };
+  wallsFinished: number;
+  wallsTotal: number;
+  perWall: { surfaceId: string; name: string; expectedBags: number; loggedBags: number; ratio: number | null; status: string; finished: boolean }[];
+  warnings: { wall: string; kind: "overfill" | "underfill"; bagsAtRaise: number; raisedAt: number; state: "open" | "resolved" | "cleared"; resolution: { note: string; by: string; at: number } | null }[];
+  /** Predicted (calc without the reading) against the blower-door reading at test-out, when one was taken. */
+  testOut: { testInCfm50: number | null; predictedCfm50: number | null; measuredCfm50: number; measuredReductionPct: number | null; testedAt: number } | null;
 };
 
 /** The figures a version list shows side by side. */
