@@ -134,6 +134,18 @@ export type AssemblyDefinition = {
 
 export type FuelPrices = Partial<Record<Fuel, number>>;
 
+/** One priced line changed for one job: a quantity, a unit price in cents, or both. */
+export type LineOverride = { quantity?: number; unitPriceCents?: number };
+/**
+ * An upgrade's per-job pricing (lib/documents/proposal-lines.ts prices it): line overrides keyed by
+ * the line's key ("bags", "holes", "labour", "area", "hours", "item"), and an optional override of
+ * the upgrade's whole installed cost with the reason for it.
+ */
+export type UpgradePricing = {
+  lines?: Record<string, LineOverride>;
+  totalOverride?: { cents: number; reason: string } | null;
+};
+
 // ---------------------------------------------------------------- column helpers
 
 const id = () =>
@@ -169,7 +181,8 @@ export const companies = sqliteTable("companies", {
   address: text("address"),
   licenseLine: text("license_line"),
   insuranceLine: text("insurance_line"),
-  taxRateBasisPoints: integer("tax_rate_basis_points").notNull().default(0),
+  /** Sales tax in parts per million of the taxable subtotal: 6.625 % is 66 250. */
+  taxRatePpm: integer("tax_rate_ppm").notNull().default(0),
   gridCo2LbPerKwh: real("grid_co2_lb_per_kwh"),
   /** Default price per fuel unit (therm, gallon, kWh) in cents, offered on new jobs. */
   fuelPricesCentsPerUnit: text("fuel_prices_cents_per_unit", { mode: "json" }).$type<FuelPrices>(),
@@ -520,6 +533,8 @@ export const upgrades = sqliteTable(
     costCents: integer("cost_cents").notNull().default(0),
     lifeYears: integer("life_years").notNull(),
     priceBookItemId: text("price_book_item_id").references(() => priceBookItems.id, { onDelete: "set null" }),
+    /** Per-job changes to the lines priced from the price book; `cost_cents` is the priced result. */
+    pricing: text("pricing", { mode: "json" }).$type<UpgradePricing>(),
     notes: text("notes"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -533,7 +548,8 @@ export const proposals = sqliteTable(
     id: id(),
     jobId: jobRef(),
     status: text("status", { enum: proposalStatuses }).notNull().default("draft"),
-    taxRateBasisPoints: integer("tax_rate_basis_points").notNull(),
+    /** The company's rate when the proposal was last priced, in parts per million (6.625 % is 66 250). */
+    taxRatePpm: integer("tax_rate_ppm").notNull().default(0),
     depositCents: integer("deposit_cents").notNull().default(0),
     validUntil: integer("valid_until", { mode: "timestamp_ms" }),
     terms: text("terms"),

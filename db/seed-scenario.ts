@@ -288,7 +288,8 @@ export function buildScenario(now: Date, passwordHash: string): SeedRows {
       address: "48 Ferrowick Lane, Harrowmere, NJ 07000",
       licenseLine: "NJ Home Improvement Contractor Reg. No. 13VH00000000 (demo)",
       insuranceLine: "General liability $1,000,000 per occurrence; certificate on request (demo)",
-      taxRateBasisPoints: 0,
+      // 6.625 % on taxable lines (the permit is not), in parts per million: a demo figure, not tax advice.
+      taxRatePpm: 66_250,
       gridCo2LbPerKwh: null,
       fuelPricesCentsPerUnit: fuelPrices,
       createdAt: at(400),
@@ -379,6 +380,7 @@ function priceBook(companyId: string, createdAt: Date): NewPriceBookItem[] {
     { code: "DRILL-PLUG", name: "Drill, plug and patch", kind: "labour", unit: "hole", unitPriceCents: 900 },
     { code: "AIR-SEAL", name: "Air sealing labour", kind: "labour", unit: "hour", unitPriceCents: 9500 },
     { code: "ATTIC-BLOWN", name: "Attic insulation, blown loose fill", kind: "material", unit: "ft2", unitPriceCents: 185 },
+    { code: "WINDOW", name: "Replacement window, installed", kind: "material", unit: "each", unitPriceCents: 68000 },
     { code: "PERMIT", name: "Building permit and inspection", kind: "other", unit: "permit", unitPriceCents: 25000, taxable: false },
   ];
   return items.map((item) => ({ ...item, id: seedId(`price:${item.code}`), companyId, createdAt, updatedAt: createdAt }));

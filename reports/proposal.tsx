@@ -1,7 +1,7 @@
 // The proposal as a PDF: the priced line items, totals, deposit, validity, terms and the
 // company's licence and insurance, then the savings report's pages appended in the same file.
 import { Document, Text, View } from "@react-pdf/renderer";
-import type { ReportSnapshot } from "@/lib/documents/snapshot";
+import { taxRatePpmOf, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { Heading, P, Table } from "./parts/blocks";
 import { registerFonts } from "./parts/fonts";
 import { ReportPage } from "./parts/page";
@@ -88,7 +88,7 @@ function ProposalBody({ snapshot: sn }: { snapshot: ReportSnapshot }) {
         </View>
         <View style={{ width: 220 }}>
           <TotalRow label="Subtotal" value={t.dollars(p.subtotalCents)} />
-          <TotalRow label={`Tax at ${t.taxRate(p.taxRateBasisPoints)}`} value={t.dollars(p.taxCents)} />
+          <TotalRow label={`Tax at ${t.taxRate(taxRatePpmOf(p))}`} value={t.dollars(p.taxCents)} />
           <TotalRow label="Total" value={t.dollars(p.totalCents)} strong />
           <TotalRow label="Deposit on acceptance" value={t.dollars(p.depositCents)} />
           <TotalRow label="Balance on completion" value={t.dollars(balance)} />

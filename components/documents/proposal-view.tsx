@@ -1,4 +1,4 @@
-import type { ReportSnapshot } from "@/lib/documents/snapshot";
+import { taxRateLabel, taxRatePpmOf, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { formatDollars } from "@/lib/money";
 
 const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long" });
@@ -26,7 +26,7 @@ export function ProposalView({ snapshot }: { snapshot: ReportSnapshot }) {
           </tbody>
           <tfoot className="text-right">
             <tr className="border-t border-line"><th scope="row" colSpan={3} className="px-3 py-1 font-normal">Subtotal</th><td className="px-3 py-1 tabular-nums">{formatDollars(p.subtotalCents)}</td></tr>
-            <tr><th scope="row" colSpan={3} className="px-3 py-1 font-normal">Sales tax ({(p.taxRateBasisPoints / 100).toFixed(3).replace(/\.?0+$/, "")} %)</th><td className="px-3 py-1 tabular-nums">{formatDollars(p.taxCents)}</td></tr>
+            <tr><th scope="row" colSpan={3} className="px-3 py-1 font-normal">Sales tax ({taxRateLabel(taxRatePpmOf(p))})</th><td className="px-3 py-1 tabular-nums">{formatDollars(p.taxCents)}</td></tr>
             <tr className="text-lg font-bold"><th scope="row" colSpan={3} className="px-3 py-1">Total</th><td className="px-3 py-1 tabular-nums" data-testid="proposal-total">{formatDollars(p.totalCents)}</td></tr>
             <tr><th scope="row" colSpan={3} className="px-3 py-1 font-normal">Deposit due on acceptance</th><td className="px-3 py-1 tabular-nums">{formatDollars(p.depositCents)}</td></tr>
           </tfoot>

@@ -19,6 +19,23 @@ export const leakageTestSchema = z.object({
   notes: z.string().max(1000).nullable().optional(),
 });
 
+// Per-job changes to an upgrade's priced lines (lib/documents/proposal-lines.ts): quantities and
+// unit prices by line key, and an override of the whole installed cost that must say why.
+const lineOverrideSchema = z.object({
+  quantity: z.number({ error: "quantity must be a number" }).min(0, "quantity cannot be negative").max(1_000_000, "quantity must be at most 1,000,000").optional(),
+  unitPriceCents: z.number({ error: "unit price must be a number" }).int("unit price must be whole cents").min(0, "unit price cannot be negative").max(100_000_000, "unit price must be at most $1,000,000").optional(),
+});
+export const upgradePricingSchema = z.object({
+  lines: z.record(z.string().min(1).max(40), lineOverrideSchema).optional(),
+  totalOverride: z
+    .object({
+      cents: z.number({ error: "installed cost must be a number" }).int("installed cost must be whole cents").min(0, "installed cost cannot be negative").max(1_000_000_000, "installed cost must be at most $10,000,000"),
+      reason: z.string().trim().min(1, "say why the total is overridden").max(300, "reason must be at most 300 characters"),
+    })
+    .nullable()
+    .optional(),
+});
+
 export const assessmentDocSchema = z.object({
   house: z.object({
     yearBuilt: hs.yearBuilt,
@@ -44,7 +61,7 @@ export const assessmentDocSchema = z.object({
   // Surfaces keep calc's shape plus an id per opening; calc checks every number of them on save.
   surfaces: z.array(z.intersection(surfaceSchema, z.object({ openings: z.array(z.looseObject({ id: z.string().max(100).optional() })).max(100).default([]) }))).max(1000),
   assemblies: z.array(assemblySchema).max(200),
-  upgrades: z.array(z.intersection(upgradeSchema, z.object({ id: z.string().min(1).max(100), priceBookItemId: z.string().nullable().optional() }))).max(30),
+  upgrades: z.array(z.intersection(upgradeSchema, z.object({ id: z.string().min(1).max(100), priceBookItemId: z.string().nullable().optional(), pricing: upgradePricingSchema.nullable().optional() }))).max(30),
 });
 
 type CalcSurface = HouseInput["surfaces"][number];

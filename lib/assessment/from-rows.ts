@@ -69,7 +69,7 @@ export function docFromRows(r: {
 
 function upgradeFromRow(u: Row<typeof upgrades>): AssessmentUpgrade {
   const p = u.params;
-  const base = { id: u.id, costUSD: u.costCents / 100, lifeYears: u.lifeYears, priceBookItemId: u.priceBookItemId, ...(u.name ? { name: u.name } : {}) };
+  const base = { id: u.id, costUSD: u.costCents / 100, lifeYears: u.lifeYears, priceBookItemId: u.priceBookItemId, ...(u.pricing ? { pricing: u.pricing } : {}), ...(u.name ? { name: u.name } : {}) };
   switch (u.type) {
     case "dense-pack-walls":
       return { ...base, type: u.type, surfaceIds: (p.surfaceIds as string[] | undefined) ?? "all-walls", ...(p.rPerInchIP ? { rPerInchIP: Number(p.rPerInchIP) } : {}) };

@@ -26,7 +26,7 @@ export function toHouseInput(doc: AssessmentDoc): HouseInput {
     infiltration: { method: "n-factor", nFactorZone: nFactorZoneByDefault, shielding: h.shielding },
     surfaces: doc.surfaces.map((s) => ({ ...s, openings: s.openings.map(({ id: _id, ...o }) => (void _id, o)) })),
     assemblies: doc.assemblies,
-    upgrades: doc.upgrades.map(({ id: _id, priceBookItemId: _p, ...u }) => (void _id, void _p, u)) as HouseInput["upgrades"],
+    upgrades: doc.upgrades.map(({ id: _id, priceBookItemId: _p, pricing: _q, ...u }) => (void _id, void _p, void _q, u)) as HouseInput["upgrades"],
     facts: {
       knobAndTube: h.hazards.knobAndTube,
       vermiculite: h.hazards.vermiculite,

@@ -2,12 +2,14 @@ import "server-only";
 import { and, asc, eq, isNull, notInArray } from "drizzle-orm";
 import { analyzeHouse, CalcInputError, MEASURE_LIFE_YEARS, validateHouseInput } from "@/calc";
 import { getDb } from "@/db";
-import { assemblies, companies, heatingSystems, houses, jobs, leakageTests, surfaces, upgrades } from "@/db/schema";
+import { assemblies, companies, heatingSystems, houses, jobs, leakageTests, priceBookItems, surfaces, upgrades } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import { docFromRows, fuelToDb, upgradeParams } from "@/lib/assessment/from-rows";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
+import { twoPass } from "@/lib/assessment/pricing";
 import { docPath, toHouseInput } from "@/lib/assessment/to-house-input";
+import type { PriceItem } from "@/lib/documents/proposal-lines";
 import { logActivity } from "./activity";
 import { jobScope } from "./scope";
 
@@ -18,10 +20,22 @@ async function scopedJob(user: AuthUser, jobId: string) {
   return job;
 }
 
+/** The company's active price book items, as the pricing function takes them. */
+export async function activePriceItems(user: AuthUser): Promise<PriceItem[]> {
+  return getDb()
+    .select({ id: priceBookItems.id, code: priceBookItems.code, name: priceBookItems.name, unit: priceBookItems.unit, unitPriceCents: priceBookItems.unitPriceCents, taxable: priceBookItems.taxable })
+    .from(priceBookItems)
+    .where(and(eq(priceBookItems.companyId, user.companyId), eq(priceBookItems.active, true)));
+}
+
+/**
+ * The job's assessment. Upgrade costs are priced from the company's price book as it is now,
+ * with the job's overrides (lib/assessment/pricing.ts), so a changed price shows on the next load.
+ */
 export async function loadAssessment(user: AuthUser, jobId: string) {
   const db = getDb();
   const job = await scopedJob(user, jobId);
-  const [[house], heating, tests, surfaceRows, jobAssemblies, upgradeRows, [company], library] = await Promise.all([
+  const [[house], heating, tests, surfaceRows, jobAssemblies, upgradeRows, [company], library, items] = await Promise.all([
     db.select().from(houses).where(eq(houses.id, job.houseId)),
     db.select().from(heatingSystems).where(eq(heatingSystems.jobId, jobId)).orderBy(asc(heatingSystems.createdAt)),
     db.select().from(leakageTests).where(eq(leakageTests.jobId, jobId)).orderBy(asc(leakageTests.testedAt)),
@@ -30,12 +44,14 @@ export async function loadAssessment(user: AuthUser, jobId: string) {
     db.select().from(upgrades).where(eq(upgrades.jobId, jobId)),
     db.select({ fuelPrices: companies.fuelPricesCentsPerUnit }).from(companies).where(eq(companies.id, user.companyId)),
     db.select().from(assemblies).where(and(eq(assemblies.companyId, user.companyId), isNull(assemblies.jobId))),
+    activePriceItems(user),
   ]);
   const primary = heating.find((h) => h.isPrimary) ?? heating[0];
-  const doc = docFromRows({
+  const stored = docFromRows({
     house: house!, targetCfm50: job.targetCfm50, heating: primary, defaultFuelPriceCents: company?.fuelPrices?.gas ?? 150,
     tests, surfaces: surfaceRows, assemblies: jobAssemblies, upgrades: upgradeRows,
   });
+  const { doc } = twoPass(stored, items, analyzeDoc);
   const companyLibrary = docFromRows({ house: house!, targetCfm50: null, heating: undefined, defaultFuelPriceCents: 0, tests: [], surfaces: [], assemblies: library, upgrades: [] }).assemblies;
   return { jobId, version: job.version, doc, companyLibrary };
 }
@@ -55,11 +71,15 @@ export function analyzeDoc(doc: AssessmentDoc) {
 }
 
 /** Saves the whole assessment if `version` is still the job's; a stale one gets 409 with the current document. */
-export async function saveAssessment(user: AuthUser, jobId: string, version: number, doc: AssessmentDoc) {
+export async function saveAssessment(user: AuthUser, jobId: string, version: number, sent: AssessmentDoc) {
+  let doc = sent;
   const db = getDb();
   const job = await scopedJob(user, jobId);
   const stale = () => new ApiError(409, "Someone else saved this assessment since you loaded it. Your edits are kept on this device; reload to see theirs, then apply yours again.");
   if (job.version !== version) throw stale();
+  // The costs the browser sent are not trusted: they are priced again here, from the same lines.
+  const priced = twoPass(doc, await activePriceItems(user), analyzeDoc);
+  doc = priced.doc;
   const h = doc.house;
   const ok = await db.transaction(async (tx) => {
     const bumped = await tx.update(jobs).set({ version: version + 1, updatedAt: new Date(), targetCfm50: doc.leakage.targetCfm50 ?? null }).where(and(eq(jobs.id, jobId), eq(jobs.version, version))).returning({ id: jobs.id });
@@ -119,12 +139,12 @@ export async function saveAssessment(user: AuthUser, jobId: string, version: num
     const upIds = doc.upgrades.map((u) => u.id);
     await tx.delete(upgrades).where(and(eq(upgrades.jobId, jobId), upIds.length ? notInArray(upgrades.id, upIds) : undefined));
     for (const [i, u] of doc.upgrades.entries()) {
-      const values = { type: u.type, name: u.name ?? null, position: i, params: upgradeParams(u), costCents: Math.round(u.costUSD * 100), lifeYears: u.lifeYears ?? MEASURE_LIFE_YEARS[u.type], priceBookItemId: u.priceBookItemId ?? null };
+      const values = { type: u.type, name: u.name ?? null, position: i, params: upgradeParams(u), costCents: Math.round(u.costUSD * 100), lifeYears: u.lifeYears ?? MEASURE_LIFE_YEARS[u.type], priceBookItemId: u.priceBookItemId ?? null, pricing: u.pricing ?? null };
       await tx.insert(upgrades).values({ ...values, id: u.id, jobId }).onConflictDoUpdate({ target: upgrades.id, set: values, setWhere: eq(upgrades.jobId, jobId) });
     }
     return true;
   });
   if (!ok) throw stale();
   await logActivity(db, { companyId: user.companyId, userId: user.id, action: "assessment.save", entityType: "job", entityId: jobId });
-  return { version: version + 1, ...analyzeDoc(doc) };
+  return { version: version + 1, ...priced.result };
 }

@@ -2,22 +2,23 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { and, desc, eq, isNull, max } from "drizzle-orm";
 import { getDb } from "@/db";
-import { acceptances, clients, companies, houses, issuedDocuments, jobs, jobStageEvents, priceBookItems, users } from "@/db/schema";
+import { acceptances, clients, companies, houses, issuedDocuments, jobs, jobStageEvents, users } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import { latestTest } from "@/lib/assessment/doc";
-import { proposalLines } from "@/lib/documents/proposal-lines";
+import { priceDoc } from "@/lib/assessment/pricing";
+import { frozenLine, proposalLines, proposalTotals, type PricedLine } from "@/lib/documents/proposal-lines";
 import { headline, type DocumentKind, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { queueMail } from "@/lib/mail/outbox";
 import { logActivity } from "./activity";
-import { analyzeDoc, loadAssessment } from "./assessment";
+import { activePriceItems, analyzeDoc, loadAssessment } from "./assessment";
 import { documentExtras } from "./document-extras";
+import { DEPOSIT_SHARE, freezeDraft, setProposalStatus, writeDraft } from "./proposals";
 import { jobScope } from "./scope";
 
 const DAY = 86_400_000;
 export const PROPOSAL_VALID_DAYS = 30;
-// Deposit share and terms are the company's; these defaults are invented for the demo.
-export const DEPOSIT_SHARE = 0.25;
+// Terms are the company's; this default is invented for the demo. The deposit share is in ./proposals.
 const TERMS = "Work follows local codes and licensed practice. Quantities are estimates: material is billed as installed, within 10 % of the estimate unless agreed in writing. The deposit is due on acceptance; the balance on completion after the test-out.";
 
 export const contentHash = (snapshot: ReportSnapshot) => createHash("sha256").update(JSON.stringify(snapshot)).digest("hex");
@@ -37,15 +38,16 @@ export async function issueDocument(user: AuthUser, jobId: string, kind: Documen
   const now = Date.now();
   const c = row.company;
   let proposal: ReportSnapshot["proposal"];
+  let draftLines: PricedLine[] = [];
   if (kind === "proposal") {
-    const items = await db.select().from(priceBookItems).where(and(eq(priceBookItems.companyId, user.companyId), eq(priceBookItems.active, true)));
-    const ceilingAreaFt2 = doc.surfaces.filter((s) => s.kind === "ceiling").reduce((a, s) => a + s.grossAreaFt2, 0);
-    const lines = proposalLines(analysis, items, { ceilingAreaFt2, permit: true });
-    const subtotalCents = lines.reduce((a, l) => a + l.totalCents, 0);
-    const taxable = lines.filter((l) => l.taxable !== false).reduce((a, l) => a + l.totalCents, 0);
-    const taxCents = Math.round((taxable * c.taxRateBasisPoints) / 10_000);
-    const totalCents = subtotalCents + taxCents;
-    proposal = { lines, subtotalCents, taxRateBasisPoints: c.taxRateBasisPoints, taxCents, totalCents, depositCents: Math.round(totalCents * DEPOSIT_SHARE), validUntil: now + PROPOSAL_VALID_DAYS * DAY, terms: TERMS };
+    // The same priced lines as the upgrade costs in `analysis` (one function prices both).
+    const pricing = priceDoc(doc, analysis, await activePriceItems(user));
+    draftLines = proposalLines(pricing);
+    const totals = proposalTotals(draftLines, c.taxRatePpm);
+    proposal = {
+      lines: draftLines.map(frozenLine), subtotalCents: totals.subtotalCents, upgradesCents: totals.upgradesCents, taxRatePpm: c.taxRatePpm, taxCents: totals.taxCents, totalCents: totals.totalCents,
+      depositCents: Math.round(totals.totalCents * DEPOSIT_SHARE), validUntil: now + PROPOSAL_VALID_DAYS * DAY, terms: TERMS,
+    };
   }
 
   return db.transaction(async (tx) => {
@@ -61,9 +63,16 @@ export async function issueDocument(user: AuthUser, jobId: string, kind: Documen
       assessment: doc, analysis, proposal, ...extras,
     };
     await tx.update(issuedDocuments).set({ supersededAt: new Date(now) }).where(and(eq(issuedDocuments.jobId, jobId), eq(issuedDocuments.kind, kind), isNull(issuedDocuments.supersededAt)));
+    // A proposal freezes the job's draft: the lines are written once more from this very pricing,
+    // the draft becomes "issued" and an earlier issued one "superseded".
+    let proposalId: string | null = null;
+    if (proposal) {
+      proposalId = await writeDraft(tx, jobId, doc, draftLines, c.taxRatePpm);
+      await freezeDraft(tx, jobId, proposalId, { validUntil: proposal.validUntil, terms: proposal.terms });
+    }
     const [created] = await tx
       .insert(issuedDocuments)
-      .values({ companyId: user.companyId, jobId, kind, version, snapshot: snapshot as unknown as Record<string, unknown>, contentHash: contentHash(snapshot), issuedAt: new Date(now), issuedById: user.id })
+      .values({ companyId: user.companyId, jobId, kind, version, snapshot: snapshot as unknown as Record<string, unknown>, contentHash: contentHash(snapshot), issuedAt: new Date(now), issuedById: user.id, proposalId })
       .returning();
     return created!;
   }).then(async (created) => {
@@ -110,6 +119,8 @@ export async function acceptProposal(user: AuthUser, id: string, input: { name: 
   const result = await db.transaction(async (tx) => {
     const inserted = await tx.insert(acceptances).values({ issuedDocumentId: id, name: input.name, ip, userAgent, documentHash: doc.contentHash, acceptedAt: now, userId: user.id }).onConflictDoNothing().returning({ id: acceptances.id });
     if (!inserted.length) return false;
+    const [issued] = await tx.select({ proposalId: issuedDocuments.proposalId }).from(issuedDocuments).where(eq(issuedDocuments.id, id));
+    if (issued?.proposalId) await setProposalStatus(tx, issued.proposalId, "accepted");
     const [job] = await tx.select({ stage: jobs.stage, version: jobs.version }).from(jobs).where(eq(jobs.id, doc.jobId));
     if (job && job.stage !== "approved") {
       await tx.update(jobs).set({ stage: "approved", version: job.version + 1, updatedAt: now }).where(eq(jobs.id, doc.jobId));

@@ -20,8 +20,12 @@ export type ProposalLine = {
 export type ProposalTerms = {
   lines: ProposalLine[];
   subtotalCents: number;
-  /** Hundredths of a percent: 6.625 % is 662.5 → stored as 662.5 basis points. */
-  taxRateBasisPoints: number;
+  /** The lines that price upgrades, added up: equals the savings report's package cost (both before tax). */
+  upgradesCents?: number;
+  /** Sales tax in parts per million of the taxable lines: 6.625 % is 66 250. */
+  taxRatePpm?: number;
+  /** Snapshots issued before the rate was kept in ppm: hundredths of a percent (662.5 for 6.625 %). */
+  taxRateBasisPoints?: number;
   taxCents: number;
   totalCents: number;
   depositCents: number;
@@ -43,6 +47,8 @@ export type ReportSnapshot = {
   assessment: AssessmentDoc;
   analysis: HouseAnalysis;
   proposal?: ProposalTerms;
+  /** Where the upgrade costs came from, and whether they include sales tax (absent on older snapshots). */
+  costBasis?: { source: "price-book"; includesSalesTax: boolean };
   /** Photos chosen for this document; a homeowner may read exactly these. */
   photoIds: string[];
   /** What the report shows beside each photo in `photoIds`, frozen at issue (older snapshots lack it). */
@@ -74,6 +80,16 @@ export type CrewSummarySnapshot = {
   /** Predicted (calc without the reading) against the blower-door reading at test-out, when one was taken. */
   testOut: { testInCfm50: number | null; predictedCfm50: number | null; measuredCfm50: number; measuredReductionPct: number | null; testedAt: number } | null;
 };
+
+/** A proposal's tax rate in parts per million, whichever way its snapshot stored it. */
+export function taxRatePpmOf(p: Pick<ProposalTerms, "taxRatePpm" | "taxRateBasisPoints">): number {
+  return p.taxRatePpm ?? Math.round((p.taxRateBasisPoints ?? 0) * 100);
+}
+
+/** A rate in ppm as written: 66 250 → "6.625 %". */
+export function taxRateLabel(ppm: number): string {
+  return `${String(Number((ppm / 10_000).toFixed(4)))} %`;
+}
 
 /** The figures a version list shows side by side. */
 export function headline(s: ReportSnapshot) {

@@ -3,6 +3,7 @@
 // and the formatters here are the screen's (components/assessment/results/format.ts) passed
 // through it, so the screen and the PDF show the same figures.
 import * as f from "@/components/assessment/results/format";
+import { taxRateLabel } from "@/lib/documents/snapshot";
 import { formatDollars } from "@/lib/money";
 
 const REPLACE: [RegExp, string][] = [
@@ -56,8 +57,5 @@ const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "Ame
 /** A date as the homeowner reads it: "October 14, 2025". */
 export const date = (ms: number) => day.format(new Date(ms));
 
-/** Basis points with hundredths of a percent as written: 662.5 → "6.625 %". */
-export function taxRate(basisPoints: number): string {
-  const pct = basisPoints / 100;
-  return `${String(Number(pct.toFixed(4)))} %`;
-}
+/** A tax rate in parts per million as written: 66 250 → "6.625 %". */
+export const taxRate = taxRateLabel;

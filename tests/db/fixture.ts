@@ -66,7 +66,7 @@ export async function buildCompany(db: Db, slug: string) {
     .insert(s.upgrades)
     .values({ jobId: job.id, type: "dense-pack-walls", lifeYears: 30, priceBookItemId: item.id, params: { surfaceIds: [wall.id] } })
     .returning();
-  const [proposal] = await db.insert(s.proposals).values({ jobId: job.id, taxRateBasisPoints: 0 }).returning();
+  const [proposal] = await db.insert(s.proposals).values({ jobId: job.id, taxRatePpm: 0 }).returning();
   await db.insert(s.proposalLineItems).values({
     proposalId: proposal.id,
     position: 0,

@@ -74,11 +74,11 @@ export function demoSnapshot(kind: DocumentKind, opts: DemoOptions = {}): Report
       line("Building permit, and blower-door and combustion-safety test-out", 1, "each", 35_000),
     ];
     const subtotalCents = lines.reduce((a, l) => a + l.totalCents, 0);
-    const taxRateBasisPoints = 662.5;
-    const taxCents = Math.round((subtotalCents * taxRateBasisPoints) / 10_000);
+    const taxRatePpm = 66_250;
+    const taxCents = Math.round((subtotalCents * taxRatePpm) / 1_000_000);
     const totalCents = subtotalCents + taxCents;
     proposal = {
-      lines, subtotalCents, taxRateBasisPoints, taxCents, totalCents,
+      lines, subtotalCents, taxRatePpm, taxCents, totalCents,
       depositCents: Math.round((totalCents * 0.25) / 100) * 100,
       validUntil: ISSUED_AT + 30 * DAY,
       terms: [

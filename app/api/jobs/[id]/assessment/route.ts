@@ -8,9 +8,9 @@ import { saveAssessmentSchema } from "@/lib/validation/assessment";
 
 type Params = { id: string };
 
-/** Installers read the assessment of their jobs without prices: fuel price and upgrade costs are removed. */
+/** Installers read the assessment of their jobs without prices: fuel price, upgrade costs and per-job pricing are removed. */
 function withoutPrices(doc: AssessmentDoc): AssessmentDoc {
-  return { ...doc, heating: { ...doc.heating, pricePerUnitUSD: 0 }, upgrades: doc.upgrades.map((u) => ({ ...u, costUSD: 0, priceBookItemId: null })) };
+  return { ...doc, heating: { ...doc.heating, pricePerUnitUSD: 0 }, upgrades: doc.upgrades.map((u) => ({ ...u, costUSD: 0, priceBookItemId: null, pricing: null })) };
 }
 
 export const GET = withAuth<Params>(
