@@ -66,7 +66,8 @@ const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
     "clients:invite",
   ]),
   installer: new Set<Permission>([...staffCommon, "crewlog:write", "leakage:write"]),
-  homeowner: new Set<Permission>(["portal:read", "documents:read", "proposals:accept"]),
+  // photos:read reaches only the photos named by the homeowner's own issued documents (lib/data/photos.ts, photoScope).
+  homeowner: new Set<Permission>(["portal:read", "documents:read", "proposals:accept", "photos:read"]),
 };
 
 export function can(role: RoleName, permission: Permission): boolean {

@@ -13,7 +13,8 @@ import { jobScope } from "./scope";
  * A photo reaches a homeowner only through an issued document. When a savings report or proposal
  * is issued with photos, its snapshot carries `photoIds: string[]`, the ids of the `photos` rows
  * shown in it (in the order shown). This condition is true for a photo named by any issued
- * document of the photo's own job (superseded versions included: the homeowner was sent them).
+ * document of the photo's own job and company (superseded versions included: the homeowner was
+ * sent them). Only issued documents count: a proposal still being drafted is not in this table.
  */
 export function inIssuedDocument(db: Db): SQL {
   return exists(
@@ -23,13 +24,17 @@ export function inIssuedDocument(db: Db): SQL {
       .where(
         and(
           eq(issuedDocuments.jobId, photos.jobId),
+          eq(issuedDocuments.companyId, photos.companyId),
           sql`exists (select 1 from json_each(${issuedDocuments.snapshot}, '$.photoIds') where json_each.value = ${photos.id})`,
         ),
       ),
   );
 }
 
-/** Which photos a user may see: those of jobs in their scope; for a homeowner only issued ones. */
+/**
+ * Which photos a user may see: those of jobs in their scope; for a homeowner (whose job scope is
+ * their own house) only those their issued documents include. Every read path goes through this.
+ */
 function photoScope(db: Db, user: AuthUser): SQL {
   const jobVisible = exists(db.select({ one: sql`1` }).from(jobs).where(and(eq(jobs.id, photos.jobId), jobScope(db, user))));
   const own = and(eq(photos.companyId, user.companyId), jobVisible)!;

@@ -2,9 +2,12 @@ import { describe, expect, it } from "vitest";
 import { can, permissions, roleNames } from "@/lib/authz/permissions";
 
 describe("role → permission map", () => {
-  it("gives homeowners only portal reading, their documents and accepting a proposal", () => {
+  it("gives homeowners only portal reading, their documents, the photos in them and accepting a proposal", () => {
     const granted = permissions.filter((p) => can("homeowner", p));
-    expect(granted.sort()).toEqual(["documents:read", "portal:read", "proposals:accept"]);
+    // photos:read is limited by the data layer to photos named by their own issued documents
+    expect(granted.sort()).toEqual(["documents:read", "photos:read", "portal:read", "proposals:accept"]);
+    expect(can("homeowner", "photos:upload")).toBe(false);
+    expect(can("homeowner", "photos:delete")).toBe(false);
   });
 
   it("keeps prices and user management away from installers", () => {
