@@ -80,17 +80,28 @@ function boundsCheck(nums: Record<string, Bound>, texts: Record<string, number>)
 }
 const n = () => z.number(NUM);
 
-const openingSchema = z.object({
-  kind: z.enum(["window", "door"]), areaFt2: n(), count: n().optional(),
+// The bounds of openings and surfaces, as tables: the zod schemas below and the fast path of
+// calc/fast-surfaces.ts both read them, so the two cannot drift apart.
+export const OPENING_KINDS = ["window", "door"] as const;
+export const ORIENTATIONS = ["N", "NE", "E", "SE", "S", "SW", "W", "NW", "horizontal"] as const;
+export const MAX_OPENINGS_PER_SURFACE = 100;
+export const OPENING_NUMS = { areaFt2: B.pos(2_000), count: B.int(1, 200), uFactorIP: B.pos(2) };
+export const OPENING_TEXTS = { productKey: 100, label: 200 };
+export const SURFACE_NUMS = { grossAreaFt2: B.pos(20_000), heightFt: B.pos(100), bufferFactor: B.frac(), blockedBayFraction: B.frac() };
+export const SURFACE_TEXTS = { id: 100, name: 200, assemblyKey: 100 };
+export type { Bound };
+
+export const openingSchema = z.object({
+  kind: z.enum(OPENING_KINDS), areaFt2: n(), count: n().optional(),
   productKey: z.string().optional(), uFactorIP: n().optional(), label: z.string().optional(),
-}).check(boundsCheck({ areaFt2: B.pos(2_000), count: B.int(1, 200), uFactorIP: B.pos(2) }, { productKey: 100, label: 200 }));
+}).check(boundsCheck(OPENING_NUMS, OPENING_TEXTS));
 export const surfaceSchema = z.object({
   id: z.string(), name: z.string(), kind: surfaceKindSchema,
-  orientation: z.enum(["N", "NE", "E", "SE", "S", "SW", "W", "NW", "horizontal"]),
+  orientation: z.enum(ORIENTATIONS),
   grossAreaFt2: n(), assemblyKey: z.string(), heightFt: n().optional(),
-  openings: z.array(openingSchema).max(100).default([]),
+  openings: z.array(openingSchema).max(MAX_OPENINGS_PER_SURFACE).default([]),
   bufferFactor: n().optional(), blockedBayFraction: n().optional(),
-}).check(boundsCheck({ grossAreaFt2: B.pos(20_000), heightFt: B.pos(100), bufferFactor: B.frac(), blockedBayFraction: B.frac() }, { id: 100, name: 200, assemblyKey: 100 }));
+}).check(boundsCheck(SURFACE_NUMS, SURFACE_TEXTS));
 
 const surfaceIds = z.array(z.string()).min(1).max(1000).check((ctx) => {
   ctx.value.forEach((id, i) => { if (id.length === 0 || id.length > 100) ctx.issues.push({ code: "custom", message: "must be 1–100 characters", input: id, path: [i] }); });
@@ -107,6 +118,11 @@ export const climateSchema = z.discriminatedUnion("source", [
   z.object({ source: z.literal("manual"), hdd65: nonneg(20_000), heatingDesignTempF: range(-80, 80), cdd65: nonneg(10_000).optional(), sourceText: text(500) }),
   z.object({ source: z.literal("epw"), name: text(), hdd65: nonneg(20_000), cdd65: nonneg(10_000), heatingDesign996F: range(-80, 80), heatingDesign99F: range(-80, 80), sourceText: text(500) }),
 ]);
+
+/** The list rules of `surfaces`, the same for the full schema and the shell the fast path uses. */
+function surfaceList<T extends z.ZodType>(item: T) {
+  return z.array(item).min(1, { error: "needs at least one surface" }).max(1000);
+}
 
 export const houseInputSchema = z.object({
   name: text().optional(),
@@ -145,7 +161,7 @@ export const houseInputSchema = z.object({
     designWindMph: nonneg(100).default(15),
   }).prefault({}),
   assemblies: z.array(assemblySchema).max(200).default([]),
-  surfaces: z.array(surfaceSchema).min(1, { error: "needs at least one surface" }).max(1000),
+  surfaces: surfaceList(surfaceSchema),
   upgrades: z.array(upgradeSchema).max(30).default([]),
   economics: z.object({ discountRate: range(0, 0.3).default(0.03), fuelEscalationRate: range(-0.1, 0.2).default(0) }).prefault({}),
   densePack: z.object({ densityLbFt3: pos(10).default(3.5), bagWeightLb: pos(100).default(25), highRatio: range(1, 5).default(1.3), lowRatio: range(0.05, 1).default(0.8) }).prefault({}),
@@ -153,6 +169,13 @@ export const houseInputSchema = z.object({
   facts: z.object({ knobAndTube: presence.default("unknown"), vermiculite: presence.default("unknown"), combustionAppliances: z.boolean().optional() }).prefault({}),
   crewLog: z.array(z.object({ surfaceId: text(100), bagsActual: nonneg(10_000) })).max(1000).default([]),
 });
+
+/**
+ * Everything but the surfaces' contents: analyzeHouse parses this with zod and the surfaces with
+ * the fast path of calc/fast-surfaces.ts; any surface the fast path does not accept sends the
+ * whole input back through `houseInputSchema`, so every message still comes from zod.
+ */
+export const houseInputShellSchema = houseInputSchema.extend({ surfaces: surfaceList(z.unknown()) });
 
 /** What callers send (defaults optional). */
 export type HouseInput = z.input<typeof houseInputSchema>;

@@ -5,7 +5,8 @@ import { builtInAssemblies } from "./built-in-assemblies";
 import { CalcInputError, type InputIssue } from "./errors";
 import { findStation } from "./climate/stations";
 import { getWindowOrDoor } from "./materials";
-import { houseInputSchema, type HouseInputParsed } from "./schema";
+import { fastParseSurfaces } from "./fast-surfaces";
+import { houseInputSchema, houseInputShellSchema, type HouseInputParsed } from "./schema";
 
 const LABELS: Record<string, string> = {
   grossAreaFt2: "gross area (ft²)", areaFt2: "area (ft²)", volumeFt3: "house volume (ft³)", floorAreaFt2: "conditioned floor area (ft²)",
@@ -75,10 +76,21 @@ function semanticIssues(h: HouseInputParsed): { issues: InputIssue[]; assemblies
 
 export type ValidationResult = { ok: true; value: HouseInputParsed } | { ok: false; issues: InputIssue[] };
 
-function check(input: unknown): { ok: true; prepared: Prepared } | { ok: false; issues: InputIssue[] } {
+/** zod's parse of the input: the shell by zod and the surfaces by the fast path, or all by zod when either is unsure. */
+function parse(input: unknown): { success: true; data: HouseInputParsed } | { success: false; issues: readonly { path: PropertyKey[]; message: string }[] } {
+  const shell = houseInputShellSchema.safeParse(input);
+  if (shell.success) {
+    const surfaces = fastParseSurfaces(shell.data.surfaces);
+    if (surfaces) return { success: true, data: { ...shell.data, surfaces } };
+  }
   const r = houseInputSchema.safeParse(input);
+  return r.success ? { success: true, data: r.data } : { success: false, issues: r.error.issues };
+}
+
+function check(input: unknown): { ok: true; prepared: Prepared } | { ok: false; issues: InputIssue[] } {
+  const r = parse(input);
   if (!r.success) {
-    return { ok: false, issues: r.error.issues.map((i) => { const path = pathString(i.path); return { path, message: plainMessage(path, i.message) }; }) };
+    return { ok: false, issues: r.issues.map((i) => { const path = pathString(i.path); return { path, message: plainMessage(path, i.message) }; }) };
   }
   const { issues, assemblies } = semanticIssues(r.data);
   if (issues.length) return { ok: false, issues: issues.map((i) => ({ path: i.path, message: plainMessage(i.path, i.message) })) };
