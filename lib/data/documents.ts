@@ -61,6 +61,7 @@ export async function issueDocument(user: AuthUser, jobId: string, kind: Documen
       client: { name: row.client.name },
       leakageBasis: latestTest(doc, "test-out") ? "measured" : "predicted",
       assessment: doc, analysis, proposal, ...extras,
+      costBasis: { source: "price-book", includesSalesTax: false },
     };
     await tx.update(issuedDocuments).set({ supersededAt: new Date(now) }).where(and(eq(issuedDocuments.jobId, jobId), eq(issuedDocuments.kind, kind), isNull(issuedDocuments.supersededAt)));
     // A proposal freezes the job's draft: the lines are written once more from this very pricing,
