@@ -3,7 +3,7 @@
 import type { StorageDriver } from "@/lib/storage";
 import type { ReceivedFile } from "./multipart";
 import { processPhoto } from "./process";
-import { streamPlan } from "./strip";
+import { planSlices } from "./strip";
 
 export type StoredPhotoFiles = {
   storageKey: string;
@@ -19,7 +19,7 @@ export async function processAndStore(file: ReceivedFile, storage: StorageDriver
   const processed = await processPhoto(file.path, file.sniff.contentType);
   try {
     await Promise.all([
-      storage.put(keys.original, streamPlan(processed.source, processed.plan), { contentType: processed.contentType, contentLength: processed.plan.length }),
+      storage.put(keys.original, planSlices(processed.source, processed.plan), { contentType: processed.contentType, contentLength: processed.plan.length }),
       storage.put(keys.thumbnail, processed.thumbnail, { contentType: "image/webp" }),
     ]);
   } catch (err) {

@@ -9,7 +9,14 @@ import { MalformedImage, planStrip, type StripPlan } from "./strip";
 
 type Sharp = typeof import("sharp");
 let sharpModule: Promise<Sharp> | undefined;
-const loadSharp = () => (sharpModule ??= import("sharp").then((m) => ((m as unknown as { default?: Sharp }).default ?? m) as Sharp));
+// No operation cache: every upload is a new file, so cached decodes (and the file mapping libvips
+// holds for them) would only keep memory after the request.
+const loadSharp = () =>
+  (sharpModule ??= import("sharp").then((m) => {
+    const sharp = ((m as unknown as { default?: Sharp }).default ?? m) as Sharp;
+    sharp.cache(false);
+    return sharp;
+  }));
 
 export type ProcessedPhoto = {
   contentType: PhotoContentType;
@@ -49,11 +56,17 @@ export async function processPhoto(file: string, contentType: PhotoContentType):
   const orientation = meta.orientation && meta.orientation >= 1 && meta.orientation <= 8 ? meta.orientation : 1;
   const turned = orientation >= 5;
 
-  const thumbnailing = sharp(file, input)
+  // Sequential read lets libvips decode top to bottom without keeping decoded tiles around; for a
+  // JPEG it also decodes straight at 1/2, 1/4 or 1/8 scale (DCT shrink-on-load), so a 12 MP photo
+  // is never expanded to its 36 MB of pixels for a 480-pixel thumbnail.
+  // Decoding and encoding run one after the other, so their buffers are not held at once; between
+  // them sit only the thumbnail's own pixels (480 × 360 × 3 bytes, about 0.5 MB).
+  const thumbnailing = sharp(file, { ...input, sequentialRead: true })
     .rotate()
     .resize(THUMBNAIL_SIZE, THUMBNAIL_SIZE, { fit: "inside", withoutEnlargement: true })
-    .webp({ quality: 78 })
-    .toBuffer()
+    .raw()
+    .toBuffer({ resolveWithObject: true })
+    .then(({ data, info }) => sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } }).webp({ quality: 78 }).toBuffer())
     .catch(() => {
       throw unreadable(contentType, "its image data is damaged");
     });

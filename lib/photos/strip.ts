@@ -4,9 +4,8 @@
 // the photo is rotated, a fresh EXIF block holding nothing but the orientation. PNG keeps its
 // image and colour chunks; WebP keeps its image, animation and colour chunks. Anything after the
 // end of the image (phone "multi-picture" trailers, which carry their own EXIF) is cut off.
-import { createReadStream } from "node:fs";
 import { open, type FileHandle } from "node:fs/promises";
-import { Readable } from "node:stream";
+import { fileSlices, type FileSlices } from "@/lib/storage/slices";
 import type { PhotoContentType } from "./limits";
 
 export type Part = { start: number; end: number } | { bytes: Buffer };
@@ -154,13 +153,5 @@ export async function planStrip(file: string, contentType: PhotoContentType, ori
   }
 }
 
-/** The stripped photo as a stream, read range by range from the received file. */
-export function streamPlan(file: string, plan: StripPlan): Readable {
-  async function* generate() {
-    for (const part of plan.parts) {
-      if ("bytes" in part) yield part.bytes;
-      else if (part.end > part.start) yield* createReadStream(file, { start: part.start, end: part.end - 1, highWaterMark: 256 * 1024 });
-    }
-  }
-  return Readable.from(generate(), { objectMode: false });
-}
+/** The stripped photo, as byte ranges of the received file for the storage driver to copy. */
+export const planSlices = (file: string, plan: StripPlan): FileSlices => fileSlices(file, plan.parts);

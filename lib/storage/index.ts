@@ -14,7 +14,8 @@ import { LocalStorage } from "./local";
 import { S3Storage } from "./s3";
 import type { StorageDriver } from "./types";
 
-export type { PutOptions, StorageDriver, StoredObject } from "./types";
+export type { PutBody, PutOptions, StorageDriver, StoredObject } from "./types";
+export { fileSlices, isFileSlices, slicesStream, type FileSlice, type FileSlices } from "./slices";
 export { LocalStorage } from "./local";
 export { S3Storage, type S3Config } from "./s3";
 export { assertSafeKey, newPhotoKeys } from "./keys";

@@ -1,11 +1,12 @@
 import { randomUUID } from "node:crypto";
 import { createReadStream, createWriteStream } from "node:fs";
-import { mkdir, rename, rm, stat, writeFile } from "node:fs/promises";
+import { mkdir, open, rename, rm, stat, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { Readable } from "node:stream";
 import { pipeline } from "node:stream/promises";
 import { assertSafeKey } from "./keys";
-import type { PutOptions, StorageDriver, StoredObject } from "./types";
+import { copySlices, isFileSlices, type FileSlices } from "./slices";
+import type { PutBody, PutOptions, StorageDriver, StoredObject } from "./types";
 
 const isMissing = (e: unknown) => (e as NodeJS.ErrnoException)?.code === "ENOENT";
 
@@ -24,13 +25,14 @@ export class LocalStorage implements StorageDriver {
     return full;
   }
 
-  async put(key: string, body: Readable | Uint8Array, _options: PutOptions): Promise<void> {
+  async put(key: string, body: PutBody, _options: PutOptions): Promise<void> {
     void _options;
     const target = this.pathOf(key);
     await mkdir(path.dirname(target), { recursive: true });
     const temp = `${target}.partial-${randomUUID()}`;
     try {
-      if (body instanceof Readable) await pipeline(body, createWriteStream(temp, { flags: "wx" }));
+      if (isFileSlices(body)) await writeSlices(body, temp);
+      else if (body instanceof Readable) await pipeline(body, createWriteStream(temp, { flags: "wx" }));
       else await writeFile(temp, body, { flag: "wx" });
       await rename(temp, target);
     } catch (err) {
@@ -62,5 +64,20 @@ export class LocalStorage implements StorageDriver {
       if (isMissing(err)) return false;
       throw err;
     }
+  }
+}
+
+async function writeSlices(slices: FileSlices, temp: string) {
+  const source = await open(slices.path, "r");
+  try {
+    const out = await open(temp, "wx");
+    try {
+      const written = await copySlices(slices, source, out);
+      if (written !== slices.length) throw new Error(`Stored ${written} bytes where ${slices.length} were planned.`);
+    } finally {
+      await out.close();
+    }
+  } finally {
+    await source.close();
   }
 }

@@ -1,7 +1,8 @@
 import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { Readable } from "node:stream";
 import { assertSafeKey } from "./keys";
-import type { PutOptions, StorageDriver, StoredObject } from "./types";
+import { assertSlicesFit, isFileSlices, slicesStream } from "./slices";
+import type { PutBody, PutOptions, StorageDriver, StoredObject } from "./types";
 
 export type S3Config = {
   bucket: string;
@@ -39,12 +40,23 @@ export class S3Storage implements StorageDriver {
     return this.client;
   }
 
-  async put(key: string, body: Readable | Uint8Array, options: PutOptions): Promise<void> {
-    const length = body instanceof Readable ? options.contentLength : body.byteLength;
+  async put(key: string, input: PutBody, options: PutOptions): Promise<void> {
+    if (isFileSlices(input)) await assertSlicesFit(input);
+    const body = isFileSlices(input) ? slicesStream(input) : input;
+    const length = isFileSlices(input) ? input.length : body instanceof Readable ? options.contentLength : body.byteLength;
     if (length === undefined) throw new Error("S3 storage needs the content length of a streamed upload.");
-    await this.s3().send(
-      new PutObjectCommand({ Bucket: this.config.bucket, Key: assertSafeKey(key), Body: body, ContentType: options.contentType, ContentLength: length }),
-    );
+    // A body stream that fails part-way would leave the request waiting for bytes that never come.
+    const abort = new AbortController();
+    let failed: unknown;
+    if (body instanceof Readable) body.once("error", (err) => ((failed = err), abort.abort(err)));
+    try {
+      await this.s3().send(
+        new PutObjectCommand({ Bucket: this.config.bucket, Key: assertSafeKey(key), Body: body, ContentType: options.contentType, ContentLength: length }),
+        { abortSignal: abort.signal },
+      );
+    } catch (err) {
+      throw failed ?? err;
+    }
   }
 
   async get(key: string): Promise<StoredObject | null> {

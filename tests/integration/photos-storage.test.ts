@@ -1,11 +1,11 @@
 // The storage module's two drivers, and the streaming multipart reader at awkward chunk sizes.
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { Readable } from "node:stream";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { receivePhotoUpload } from "@/lib/photos/multipart";
-import { assertSafeKey, LocalStorage, newPhotoKeys, S3Storage, storageFromEnv, type StorageDriver } from "@/lib/storage";
+import { assertSafeKey, fileSlices, LocalStorage, newPhotoKeys, S3Storage, storageFromEnv, type StorageDriver } from "@/lib/storage";
 import { makeImage } from "./photos-support";
 
 vi.mock("@/lib/auth", () => import("../support/auth-mock"));
@@ -56,6 +56,34 @@ describe.each([
     expect(await store.exists(keys.original)).toBe(false);
     expect(await store.get(keys.original)).toBeNull();
     await store.delete(keys.original); // deleting twice is fine
+  });
+
+  it("stores byte ranges of a file with bytes made in memory between them, in order", async () => {
+    const store = driver();
+    const source = path.join(dir, `slices-source-${Math.random().toString(16).slice(2)}.bin`);
+    // 700 KB, so a range spans several 256 KB copy buffers; every byte differs from its neighbours.
+    const data = Buffer.alloc(700 * 1024);
+    for (let i = 0; i < data.length; i++) data[i] = (i * 7 + (i >> 8)) & 0xff;
+    writeFileSync(source, data);
+    const keys = newPhotoKeys("00000000-0000-4000-8000-000000000001", "00000000-0000-4000-8000-000000000002", "jpg");
+    const parts = [{ start: 0, end: 2 }, { bytes: Buffer.from("inserted") }, { start: 10, end: 600_000 }, { start: 650_000, end: data.length }];
+    const slices = fileSlices(source, parts);
+    const expected = Buffer.concat([data.subarray(0, 2), Buffer.from("inserted"), data.subarray(10, 600_000), data.subarray(650_000)]);
+    expect(slices.length).toBe(expected.length);
+    await store.put(keys.original, slices, { contentType: "image/jpeg" });
+    const got = await store.get(keys.original);
+    expect(got?.size).toBe(expected.length);
+    expect((await readAll(got!.body)).equals(expected)).toBe(true);
+    await store.delete(keys.original);
+  });
+
+  it("refuses a file shorter than its planned ranges, and stores nothing", async () => {
+    const store = driver();
+    const source = path.join(dir, `slices-short-${Math.random().toString(16).slice(2)}.bin`);
+    writeFileSync(source, Buffer.alloc(1000, 1));
+    const keys = newPhotoKeys("00000000-0000-4000-8000-000000000001", "00000000-0000-4000-8000-000000000002", "jpg");
+    await expect(store.put(keys.original, fileSlices(source, [{ start: 0, end: 5000 }]), { contentType: "image/jpeg" })).rejects.toThrow();
+    expect(await store.exists(keys.original)).toBe(false);
   });
 
   it("refuses keys it did not make", async () => {
