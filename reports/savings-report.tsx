@@ -3,7 +3,7 @@
 // "how we calculated this". Drawn only from the issued snapshot (no database, no clock).
 import { Document, Text, View } from "@react-pdf/renderer";
 import type { HouseEvaluation } from "@/calc/analyze";
-import type { ReportSnapshot } from "@/lib/documents/snapshot";
+import { costBasisNote, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { BigFigure, Facts, Heading, P, Table } from "./parts/blocks";
 import { ChartFrame, Columns, CumulativeChart, PairedBars } from "./parts/charts";
 import { CrewSection } from "./parts/crew";
@@ -227,7 +227,7 @@ function Upgrades({ snapshot: sn }: { snapshot: ReportSnapshot }) {
         foot={["Whole plan", t.usd(pkg.costUSD), t.usd(pkg.savings.usd), t.fuel(pkg.savings.fuelUnits, pkg.savings.fuelUnit), t.years(pkg.simplePaybackYears), t.sir(pkg.sir), ""]}
       />
       <P style={[s.small, { marginTop: 4 }]}>
-        {`SIR is the savings-to-investment ratio: what an upgrade saves over its life, in today's money, divided by its cost. 1 or more means it repays its cost. Discount rate ${t.percent(a.input.economics.discountRate, 1)}, fuel price rising ${t.percent(a.input.economics.fuelEscalationRate, 1)} a year.`}
+        {`${costBasisNote(sn) ? `${costBasisNote(sn)} ` : ""}SIR is the savings-to-investment ratio: what an upgrade saves over its life, in today's money, divided by its cost. 1 or more means it repays its cost. Discount rate ${t.percent(a.input.economics.discountRate, 1)}, fuel price rising ${t.percent(a.input.economics.fuelEscalationRate, 1)} a year.`}
       </P>
     </View>
   );

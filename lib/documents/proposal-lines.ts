@@ -92,7 +92,8 @@ export function priceJob(
     if (u.type === "dense-pack-walls") {
       const ids = new Set((a?.details.surfaceIds as string[] | undefined) ?? []);
       const walls = analysis.densePack.filter((w) => ids.has(w.surfaceId));
-      const bags = walls.reduce((s, w) => s + w.bags, 0);
+      // Cellulose is bought by the bag: the estimate's total, rounded up to a whole bag.
+      const bags = Math.ceil(walls.reduce((s, w) => s + w.bags, 0) - 1e-9);
       const holes = walls.reduce((s, w) => s + w.holes, 0);
       const bagLine = make("bags", PRICE_CODES.bags, bags, `Dense-pack cellulose, ${walls.length} walls (from the estimate)`, i, o.bags, "bag");
       lines.push(bagLine);

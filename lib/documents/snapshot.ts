@@ -81,6 +81,14 @@ export type CrewSummarySnapshot = {
   testOut: { testInCfm50: number | null; predictedCfm50: number | null; measuredCfm50: number; measuredReductionPct: number | null; testedAt: number } | null;
 };
 
+/** What the report's costs are, in one sentence (older snapshots without `costBasis` say nothing). */
+export function costBasisNote(s: Pick<ReportSnapshot, "costBasis">): string | null {
+  if (!s.costBasis) return null;
+  return s.costBasis.includesSalesTax
+    ? "Costs are priced from our price book for your house and include sales tax."
+    : "Costs are priced from our price book for your house, before sales tax; the proposal adds the permit and any sales tax.";
+}
+
 /** A proposal's tax rate in parts per million, whichever way its snapshot stored it. */
 export function taxRatePpmOf(p: Pick<ProposalTerms, "taxRatePpm" | "taxRateBasisPoints">): number {
   return p.taxRatePpm ?? Math.round((p.taxRateBasisPoints ?? 0) * 100);

@@ -58,7 +58,7 @@ describe("issuing", () => {
     expect(r.status).toBe(201);
     const full = await read(r.json.document.id, ids.owner);
     const p = full.json.document.snapshot.proposal!;
-    const bags = full.json.document.snapshot.analysis.densePack.reduce((a, w) => a + w.bags, 0);
+    const bags = Math.ceil(full.json.document.snapshot.analysis.densePack.reduce((a, w) => a + w.bags, 0)); // whole bags
     expect(p.lines.find((l) => l.unit === "bag")!.quantity).toBe(bags);
     expect(p.subtotalCents).toBe(p.lines.reduce((a, l) => a + l.totalCents, 0));
     expect(p.totalCents).toBe(p.subtotalCents + p.taxCents);

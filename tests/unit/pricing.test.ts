@@ -26,7 +26,7 @@ describe("priceJob", () => {
   const [seal, attic, dense] = p.upgrades;
 
   it("prices dense-pack from the estimate: bags, holes and crew hours at the price book's prices", () => {
-    const bags = analysis.densePack.reduce((a, w) => a + w.bags, 0);
+    const bags = Math.ceil(analysis.densePack.reduce((a, w) => a + w.bags, 0));
     const holes = analysis.densePack.reduce((a, w) => a + w.holes, 0);
     expect(bags).toBeGreaterThan(0);
     const byKey = Object.fromEntries(dense!.lines.map((l) => [l.key, l]));
