@@ -1,6 +1,7 @@
 "use client";
 
 import { createContext, useContext } from "react";
+import type { HouseAnalysis } from "@/calc/analyze";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import type { Issue } from "@/lib/hooks/use-assessment";
 
@@ -13,6 +14,8 @@ export type AssessmentCtx = {
   /** Reasons keyed by the document path of the field they belong to. */
   issues: Map<string, string[]>;
   warnings: Map<string, string[]>;
+  /** The live analysis the results panel shows (null while the input has errors), for per-surface figures. */
+  analysis?: HouseAnalysis | null;
 };
 
 const Ctx = createContext<AssessmentCtx | null>(null);

@@ -4,6 +4,7 @@ import { MEASURE_LIFE_YEARS } from "@/calc";
 import type { AssessmentUpgrade } from "@/lib/assessment/doc";
 import { setAt, useAssessmentCtx } from "./context";
 import { NumField, TextField } from "./fields";
+import { PricingSummary, UpgradePricingPanel, useLivePricing } from "./upgrade-pricing";
 
 const labels: Record<AssessmentUpgrade["type"], string> = { "dense-pack-walls": "Dense-pack walls", "attic-insulation": "Attic insulation", "air-sealing": "Air sealing", windows: "Windows" };
 
@@ -19,6 +20,7 @@ function fresh(type: AssessmentUpgrade["type"], targetCfm50?: number | null): As
 
 export function UpgradesSection() {
   const { doc, update, readOnly, pricesVisible } = useAssessmentCtx();
+  const pricing = useLivePricing();
   const move = (i: number, by: -1 | 1) => update((d) => {
     const list = [...d.upgrades];
     const [u] = list.splice(i, 1);
@@ -29,7 +31,7 @@ export function UpgradesSection() {
   return (
     <section aria-labelledby="upg-h" className="card space-y-4">
       <h2 id="upg-h" className="text-xl font-semibold text-spruce-800">Upgrades, in the order they are applied</h2>
-      <p className="text-sm text-ink-muted">Each saving is worked out on the house with the upgrades above it already done, so the package is not counted twice.</p>
+      <p className="text-sm text-ink-muted">Each saving is worked out on the house with the upgrades above it already done, so the package is not counted twice.{pricesVisible ? " Each cost is priced from your price book; change a line for this job where the house needs it." : ""}</p>
       <ol className="space-y-3">
         {doc.upgrades.map((u, i) => (
           <li key={u.id} className="rounded-lg border border-line p-3" data-testid={`upgrade-${i}`}>
@@ -39,7 +41,6 @@ export function UpgradesSection() {
               {u.type === "attic-insulation" ? <NumField path={`upgrades.${i}.targetRIP`} label="Target R (IP)" value={u.targetRIP} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "targetRIP"], n ?? Number.NaN))} /> : null}
               {u.type === "air-sealing" ? <NumField path={`upgrades.${i}.targetCfm50`} label="Target CFM50" value={u.targetCfm50} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "targetCfm50"], n ?? Number.NaN))} /> : null}
               {u.type === "windows" ? <NumField path={`upgrades.${i}.uFactorIP`} label="New window U-factor" value={u.uFactorIP} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "uFactorIP"], n ?? Number.NaN))} /> : null}
-              {pricesVisible ? <NumField path={`upgrades.${i}.costUSD`} label="Installed cost ($)" value={u.costUSD} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "costUSD"], n ?? Number.NaN))} /> : null}
               <NumField path={`upgrades.${i}.lifeYears`} label="Measure life (years)" value={u.lifeYears ?? null} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "lifeYears"], n ?? undefined))} />
             </div>
             {u.type === "dense-pack-walls" ? (
@@ -62,6 +63,7 @@ export function UpgradesSection() {
                 </div>
               </fieldset>
             ) : null}
+            {pricesVisible ? <UpgradePricingPanel i={i} price={pricing?.upgrades[i] ?? null} /> : null}
             {!readOnly ? (
               <div className="mt-2 flex flex-wrap gap-2">
                 <button type="button" className="btn-ghost" disabled={i === 0} onClick={() => move(i, -1)} aria-label={`Move ${u.name ?? labels[u.type]} earlier`}>Earlier</button>
@@ -72,6 +74,7 @@ export function UpgradesSection() {
           </li>
         ))}
       </ol>
+      {pricesVisible ? <PricingSummary pricing={pricing} /> : null}
       {!readOnly ? (
         <div className="flex flex-wrap gap-2">
           {(Object.keys(labels) as AssessmentUpgrade["type"][]).map((t) => (

@@ -4,6 +4,7 @@ import { analyzeHouse } from "@/calc";
 import * as f from "@/components/assessment/results/format";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import { toHouseInput } from "@/lib/assessment/to-house-input";
+import { formatDollars } from "@/lib/money";
 import { launch, newPage, signInAs, snap } from "./support/browser";
 
 let browser: Browser;
@@ -51,11 +52,14 @@ async function enterHouseFromScratch(page: Page, label: string) {
   await page.getByTestId("surface-4").getByLabel("Gross area (ft²)").fill("700");
   await page.getByRole("button", { name: "Add a blower-door reading" }).click();
   await page.getByTestId("leakage-0").getByLabel("CFM50").fill("3200");
+  // Costs come from the price book: dense-pack bags, holes and hours from the estimate; the air
+  // sealing crew hours are the demo default, changed here for this house.
   await page.getByRole("button", { name: "Add dense-pack walls" }).click();
-  await page.getByTestId("upgrade-0").getByLabel("Installed cost ($)").fill("4800");
+  await page.getByTestId("upgrade-0-line-bags").waitFor();
   await page.getByRole("button", { name: "Add air sealing" }).click();
   await page.getByTestId("upgrade-1").getByLabel("Target CFM50").fill("2100");
-  await page.getByTestId("upgrade-1").getByLabel("Installed cost ($)").fill("1500");
+  await page.getByTestId("upgrade-1-line-hours").getByLabel("Quantity (hour)").fill("12");
+  await page.getByTestId("upgrade-1-cost").getByText("$1,140.00").waitFor(); // 12 h × $95.00 (AIR-SEAL)
   await saved(page);
   await page.getByTestId("results-yearly-saving").waitFor();
   return job.id;
@@ -68,6 +72,12 @@ describe("assessment in the browser", () => {
     await page.waitForURL(/\/jobs$/);
     const jobId = await enterHouseFromScratch(page, "12");
     await expectResultsMatchServer(page, jobId);
+    // The server priced the same lines: its costs are the ones on screen.
+    const { doc } = (await (await page.request.get(`/api/jobs/${jobId}/assessment`)).json()) as { doc: AssessmentDoc };
+    expect(doc.upgrades[1]!.costUSD).toBe(1140);
+    expect(doc.upgrades[1]!.pricing?.lines?.hours?.quantity).toBe(12);
+    expect(doc.upgrades[0]!.costUSD).toBeGreaterThan(0);
+    expect(await page.getByTestId("upgrade-0-cost").textContent()).toBe(formatDollars(Math.round(doc.upgrades[0]!.costUSD * 100)));
     const timings = await page.evaluate(() => window.__warmsteadTimings ?? []);
     const sorted = [...timings].sort((a, b) => a - b);
     console.log(`keystroke → results (${timings.length} edits): median ${sorted[Math.floor(sorted.length / 2)]?.toFixed(1)} ms, max ${sorted.at(-1)?.toFixed(1)} ms`);
@@ -111,7 +121,8 @@ describe("assessment in the browser", () => {
     await page.getByRole("link", { name: "#1006" }).click();
     await page.getByRole("link", { name: "Assessment" }).click();
     await page.getByText("Read-only: your role can view this assessment but not change it.").waitFor();
-    await expect(page.getByLabel("Installed cost ($)").count()).resolves.toBe(0);
+    await expect(page.getByLabel("Unit price ($)").count()).resolves.toBe(0);
+    await expect(page.getByTestId("upgrade-0-pricing").count()).resolves.toBe(0);
     await expect(page.getByRole("button", { name: "Add wall" }).count()).resolves.toBe(0);
     await page.getByRole("heading", { name: "Dense-pack estimate" }).or(page.getByText(/bags/i).first()).first().waitFor();
     await snap(page, "assessment-installer-phone");
