@@ -1,5 +1,5 @@
 import { ResultsPanel } from "@/components/assessment/results";
-import type { ReportSnapshot } from "@/lib/documents/snapshot";
+import { costBasisNote, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { ProposalView } from "./proposal-view";
 
 const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long" });
@@ -20,7 +20,7 @@ export function ReportView({ snapshot }: { snapshot: ReportSnapshot }) {
         <ResultsPanel analysis={s.analysis} units="ip" />
       </div>
       <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">
-        These figures are estimates from published methods and the measurements taken at your house; actual savings depend on weather, fuel prices and how the house is used. All work follows local codes and licensed practice.
+        These figures are estimates from published methods and the measurements taken at your house; actual savings depend on weather, fuel prices and how the house is used. All work follows local codes and licensed practice.{costBasisNote(s) ? ` ${costBasisNote(s)}` : ""}
       </p>
     </article>
   );
