@@ -292,39 +292,59 @@ export async function acknowledgeSafety(user: AuthUser, jobId: string, input: Sa
 
 /**
  * Records a test-out reading, bumps the job's version (an open assessment then reloads instead of
- * overwriting it) and moves an installing job to Verified. A replayed clientRequestId records nothing new.
+ * overwriting it) and moves an installing job to Verified. The device chooses the reading's id (its
+ * clientRequestId), so a replay — the phone's queue sending again after a lost answer, or two
+ * copies racing — records nothing new and gets the same answer: the stage event a reading causes
+ * carries the reading's id, so "moved to Verified" is read back rather than remembered.
+ *
+ * The three writes go as one batch (one transaction, sent in one call): the stage event and the
+ * version bump only happen while no reading has this id, and the reading itself is inserted last,
+ * ignoring a row that already has the id. Nothing runs between the check and the insert.
  */
 export async function recordTestOut(user: AuthUser, jobId: string, input: TestOutInput) {
   const db = getDb();
   const job = await scopedJob(user, jobId);
-  const [prior] = await db.select().from(leakageTests).where(eq(leakageTests.id, input.clientRequestId));
-  let replayed = false;
-  let movedToVerified = false;
-  if (prior) {
-    if (prior.jobId !== jobId || prior.phase !== "test-out") throw new ApiError(409, "This clientRequestId was already used for another reading; make a new one.", { clientRequestId: ["Already used for another reading."] });
-    replayed = true;
-  } else {
+  const readingId = input.clientRequestId;
+  const assertOurs = (row: typeof leakageTests.$inferSelect | undefined) => {
+    if (row && (row.jobId !== jobId || row.phase !== "test-out")) throw new ApiError(409, "This clientRequestId was already used for another reading; make a new one.", { clientRequestId: ["Already used for another reading."] });
+  };
+  const [prior] = await db.select().from(leakageTests).where(eq(leakageTests.id, readingId));
+  assertOurs(prior);
+  let replayed = Boolean(prior);
+  if (!prior) {
     if (job.stage === "closed") throw new ApiError(409, "This job is closed; record a new test on a new job.");
-    movedToVerified = await db.transaction(async (tx) => {
-      await tx.insert(leakageTests).values({
-        id: input.clientRequestId, jobId, phase: "test-out", cfm50: input.cfm50, testedAt: new Date(input.testedAt ?? Date.now()),
-        outdoorTempF: input.outdoorTempF ?? null, windMph: input.windMph ?? null, notes: input.notes ?? null, recordedById: user.id,
-      });
-      const toVerified = job.stage === "installing";
-      const [current] = await tx.select({ stage: jobs.stage }).from(jobs).where(eq(jobs.id, jobId));
-      const move = toVerified && current?.stage === "installing";
-      await tx.update(jobs).set({ version: sqlIncrement(), updatedAt: new Date(), ...(move ? { stage: "verified" as const } : {}) }).where(eq(jobs.id, jobId));
-      if (move) await tx.insert(jobStageEvents).values({ jobId, fromStage: "installing", toStage: "verified", byUserId: user.id, note: `Test-out recorded: ${input.cfm50} CFM50.` });
-      return move;
-    });
-    await logActivity(db, { companyId: user.companyId, userId: user.id, action: "leakage.test-out", entityType: "job", entityId: jobId, detail: { cfm50: input.cfm50, movedToVerified } });
+    const now = Date.now();
+    const unused = sql`not exists (select 1 from ${leakageTests} where ${leakageTests.id} = ${readingId})`;
+    const [, , insert] = await db.batch([
+      db.run(sql`insert into ${jobStageEvents} (id, job_id, from_stage, to_stage, by_user_id, at, note)
+        select ${readingId}, ${jobId}, 'installing', 'verified', ${user.id}, ${now}, ${`Test-out recorded: ${input.cfm50} CFM50.`}
+        where ${unused} and (select ${jobs.stage} from ${jobs} where ${jobs.id} = ${jobId}) = 'installing'`),
+      db.run(sql`update ${jobs} set version = version + 1, updated_at = ${now}, stage = case when stage = 'installing' then 'verified' else stage end
+        where ${jobs.id} = ${jobId} and ${unused}`),
+      db
+        .insert(leakageTests)
+        .values({
+          id: readingId, jobId, phase: "test-out", cfm50: input.cfm50, testedAt: new Date(input.testedAt ?? now),
+          outdoorTempF: input.outdoorTempF ?? null, windMph: input.windMph ?? null, notes: input.notes ?? null, recordedById: user.id,
+        })
+        .onConflictDoNothing({ target: leakageTests.id }),
+    ]);
+    if (insert.rowsAffected !== 1) {
+      // Another copy of this request got there first: answer as a replay of it.
+      const [winner] = await db.select().from(leakageTests).where(eq(leakageTests.id, readingId));
+      if (!winner) throw new ApiError(409, "This reading could not be stored; please send it again.");
+      assertOurs(winner);
+      replayed = true;
+    }
   }
+  const [moved] = await db.select({ id: jobStageEvents.id }).from(jobStageEvents).where(and(eq(jobStageEvents.id, readingId), eq(jobStageEvents.jobId, jobId)));
+  const movedToVerified = Boolean(moved);
+  if (!replayed) await logActivity(db, { companyId: user.companyId, userId: user.id, action: "leakage.test-out", entityType: "job", entityId: jobId, detail: { readingId, cfm50: input.cfm50, movedToVerified } });
   const [after] = await db.select({ stage: jobs.stage, version: jobs.version }).from(jobs).where(eq(jobs.id, jobId));
   const loaded = await loadAssessment(user, jobId);
-  return { replayed, movedToVerified, stage: after!.stage, version: after!.version, result: testOutResult(loaded.doc, can(user.role, "prices:read")) };
+  return { replayed, movedToVerified, readingId, stage: after!.stage, version: after!.version, result: testOutResult(loaded.doc, can(user.role, "prices:read")) };
 }
 
-const sqlIncrement = () => sql`${jobs.version} + 1`;
 
 /** The installer's "Today": their assigned jobs that are approved or installing, with the crew-log progress. */
 export async function listTodayJobs(user: AuthUser) {

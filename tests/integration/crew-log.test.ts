@@ -2,7 +2,7 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it, vi } from "vitest";
 import { checkWall } from "@/calc";
-import { crewLogEntries, jobs, jobStageEvents } from "@/db/schema";
+import { crewLogEntries, jobs, jobStageEvents, leakageTests } from "@/db/schema";
 import { actAs } from "../support/auth-mock";
 import { call } from "../support/route";
 import { ids, seededDbForFile } from "./setup";
@@ -187,7 +187,8 @@ describe("safety acknowledgement", () => {
 });
 
 describe("test-out", () => {
-  type TestOut = { replayed: boolean; movedToVerified: boolean; stage: string; version: number; result: CrewLog["testOut"]; fields?: Record<string, string[]> };
+  type TestOut = { replayed: boolean; movedToVerified: boolean; readingId: string; stage: string; version: number; result: CrewLog["testOut"]; error?: string; fields?: Record<string, string[]> };
+  const readings = async (id?: string) => (await ctx.t.db.select().from(leakageTests).where(eq(leakageTests.jobId, ids.demoJob))).filter((t) => t.phase === "test-out" && (!id || t.id === id));
   const record = (body: Record<string, unknown>, as: string = ids.installer) =>
     (actAs(as), call<TestOut>(testOutRoute.POST as never, { method: "POST", params, body: { clientRequestId: crypto.randomUUID(), ...body } }));
 
@@ -224,11 +225,20 @@ describe("test-out", () => {
     const events = await ctx.t.db.select().from(jobStageEvents).where(eq(jobStageEvents.jobId, ids.demoJob));
     expect(events.filter((e) => e.fromStage === "installing" && e.toStage === "verified" && e.byUserId === ids.installer)).toHaveLength(1);
 
-    // A retry records nothing new and moves nothing.
-    const again = await record({ clientRequestId, cfm50: 2350 });
+    // A retry (the phone's queue sending again after the answer was lost) records nothing new,
+    // moves nothing, and gets the same answer as the first send.
+    const again = await record({ clientRequestId, cfm50: 2350, outdoorTempF: 38, windMph: 6, notes: "Attic hatch weatherstripped" });
     expect(again.status).toBe(200);
     expect(again.json.replayed).toBe(true);
+    expect(again.json.readingId).toBe(clientRequestId);
+    expect(again.json.movedToVerified).toBe(true);
     expect(again.json.version).toBe(r.json.version);
+    expect(again.json.stage).toBe("verified");
+    expect(again.json.result).toEqual(r.json.result);
+    expect(await readings(clientRequestId)).toHaveLength(1);
+    expect(await readings()).toHaveLength(1);
+    const eventsAfter = await ctx.t.db.select().from(jobStageEvents).where(eq(jobStageEvents.jobId, ids.demoJob));
+    expect(eventsAfter.filter((e) => e.toStage === "verified")).toHaveLength(1);
 
     const log = await getLog(ids.owner);
     expect(log.job.stage).toBe("verified");
@@ -243,5 +253,31 @@ describe("test-out", () => {
     expect(r.json.stage).toBe("verified");
     expect(r.json.result.measuredCfm50).toBe(2300);
     expect(r.json.result.savings.measured!.usd).toEqual(expect.any(Number));
+  });
+
+  it("two copies of one reading sent at once store one reading, and both get its answer", async () => {
+    const clientRequestId = crypto.randomUUID();
+    const before = (await readings()).length;
+    const [x, y] = await Promise.all([record({ clientRequestId, cfm50: 2280 }), record({ clientRequestId, cfm50: 2280 })]);
+    expect([x.status, y.status].sort()).toEqual([200, 201]);
+    expect(x.json.readingId).toBe(clientRequestId);
+    expect(y.json.readingId).toBe(clientRequestId);
+    expect(x.json.result).toEqual(y.json.result);
+    expect(x.json.version).toBe(y.json.version);
+    expect(await readings(clientRequestId)).toHaveLength(1);
+    expect((await readings()).length).toBe(before + 1);
+  });
+
+  it("a reading's key cannot be reused for another job, and a key from an unseen job reveals nothing", async () => {
+    const [used] = await readings();
+    const [demo] = await ctx.t.db.select().from(jobs).where(eq(jobs.id, ids.demoJob));
+    const other = (await ctx.t.db.select().from(jobs).where(eq(jobs.companyId, demo!.companyId))).find((j) => j.id !== ids.demoJob)!;
+    const r = await (actAs(ids.auditor), call<TestOut>(testOutRoute.POST as never, { method: "POST", params: { id: other.id }, body: { clientRequestId: used!.id, cfm50: 2000 } }));
+    expect(r.status).toBe(409);
+    expect(r.json.fields?.clientRequestId).toEqual(["Already used for another reading."]);
+    expect((await ctx.t.db.select().from(leakageTests).where(eq(leakageTests.jobId, other.id))).filter((t) => t.id === used!.id)).toHaveLength(0);
+    // The owner of another company: the job is not theirs, so 404 before the key is even looked at.
+    const foreign = await record({ clientRequestId: used!.id, cfm50: 2000 }, ids.otherOwner);
+    expect(foreign.status).toBe(404);
   });
 });
