@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, ne } from "drizzle-orm";
 import { getDb, type Db } from "@/db";
-import { priceBookItems, type PriceBookKind, type PriceBookUnit } from "@/db/schema";
+import { companies, priceBookItems, type PriceBookKind, type PriceBookUnit } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import type { NewPriceBookItemInput, PriceBookPatch, PriceBookQuery } from "@/lib/validation/price-book";
@@ -179,4 +179,21 @@ export async function updatePriceBookItem(user: AuthUser, id: string, patch: Pri
     detail: { code: row.code, changes },
   });
   return toItem(row);
+}
+
+/** The company's sales tax rate, in parts per million (6.625 % is 66 250). */
+export async function getTaxRate(user: AuthUser): Promise<{ taxRatePpm: number }> {
+  const [row] = await getDb().select({ taxRatePpm: companies.taxRatePpm }).from(companies).where(eq(companies.id, user.companyId));
+  if (!row) throw notFound("Company");
+  return row;
+}
+
+/** Sets the rate new proposals are taxed at; issued proposals keep the rate they were issued with. */
+export async function setTaxRate(user: AuthUser, taxRatePpm: number): Promise<{ taxRatePpm: number }> {
+  const db = getDb();
+  const before = await getTaxRate(user);
+  if (before.taxRatePpm === taxRatePpm) return before;
+  await db.update(companies).set({ taxRatePpm, updatedAt: new Date() }).where(eq(companies.id, user.companyId));
+  await logActivity(db, { companyId: user.companyId, userId: user.id, action: "company.tax-rate", entityType: "company", entityId: user.companyId, detail: { from: before.taxRatePpm, to: taxRatePpm } });
+  return { taxRatePpm };
 }

@@ -127,3 +127,36 @@ export const priceBookQuerySchema = z.object({
   active: z.enum(["all", "true", "false"], { error: "Active must be all, true or false." }).default("all"),
 });
 export type PriceBookQuery = z.infer<typeof priceBookQuerySchema>;
+
+/** The highest sales tax rate the company setting accepts: 25 %. */
+export const MAX_TAX_RATE_PPM = 250_000;
+
+/**
+ * A sales tax rate typed as a percentage ("6.625", "6.625 %", or a JSON number) → parts per
+ * million, read digit by digit so 6.625 is exactly 66 250 (up to four decimal places).
+ */
+export function parseTaxRatePercent(input: unknown): { ok: true; ppm: number } | { ok: false; message: string } {
+  const text = typeof input === "number" ? (Number.isFinite(input) ? String(input) : "") : typeof input === "string" ? input.trim().replace(/\s*%$/, "") : null;
+  if (text === null) return { ok: false, message: "Sales tax rate must be a percentage, e.g. 6.625." };
+  if (text === "") return { ok: false, message: "Enter the sales tax rate as a percentage, e.g. 6.625 (0 for none)." };
+  if (text.startsWith("-")) return { ok: false, message: "Sales tax rate cannot be negative." };
+  const m = /^(\d{1,3})(?:\.(\d*))?$/.exec(text) ?? /^()\.(\d+)$/.exec(text);
+  if (!m) return { ok: false, message: "Sales tax rate must be a percentage, e.g. 6.625." };
+  const frac = m[2] ?? "";
+  if (frac.length > 4) return { ok: false, message: "Sales tax rate can have at most four decimal places (e.g. 6.6250)." };
+  const ppm = Number(m[1] || "0") * 10_000 + Number(frac.padEnd(4, "0"));
+  if (ppm > MAX_TAX_RATE_PPM) return { ok: false, message: "Sales tax rate must be at most 25 %." };
+  return { ok: true, ppm };
+}
+
+export const taxRateSchema = z.strictObject(
+  {
+    taxRatePercent: z.unknown().transform((value, ctx) => {
+      const r = parseTaxRatePercent(value);
+      if (r.ok) return r.ppm;
+      ctx.addIssue({ code: "custom", message: r.message });
+      return z.NEVER;
+    }),
+  },
+  { error: (issue) => (issue.code === "unrecognized_keys" ? `Unknown field: ${(issue as { keys?: string[] }).keys?.join(", ")}.` : "Send { taxRatePercent } as a JSON object.") },
+);

@@ -12,6 +12,7 @@ vi.mock("@/lib/auth", () => import("../support/auth-mock"));
 
 const listRoute = await import("@/app/api/price-book/route");
 const itemRoute = await import("@/app/api/price-book/[id]/route");
+const taxRoute = await import("@/app/api/price-book/tax-rate/route");
 
 const ctx = seededDbForFile();
 
@@ -44,6 +45,16 @@ const matrix: { name: string; expect: Record<Actor, number>; run: (as: string | 
     name: "PATCH /api/price-book/[id] deactivate (a Kestrel Bay item)",
     expect: { anonymous: 401, "homeowner of the job": 403, "homeowner of another job": 403, "installer assigned": 403, "installer not assigned": 403, auditor: 403, owner: 200, "user of another company": 404 },
     run: async (as) => (actAs(as), await call(itemRoute.PATCH as never, { method: "PATCH", params: { id: seedId("price:PERMIT") }, body: { active: false } })).status,
+  },
+  {
+    name: "GET /api/price-book/tax-rate",
+    expect: { anonymous: 401, "homeowner of the job": 403, "homeowner of another job": 403, "installer assigned": 403, "installer not assigned": 403, auditor: 200, owner: 200, "user of another company": 200 },
+    run: async (as) => (actAs(as), await call(taxRoute.GET as never, { path: "/api/price-book/tax-rate" })).status,
+  },
+  {
+    name: "PUT /api/price-book/tax-rate",
+    expect: { anonymous: 401, "homeowner of the job": 403, "homeowner of another job": 403, "installer assigned": 403, "installer not assigned": 403, auditor: 403, owner: 200, "user of another company": 200 },
+    run: async (as) => (actAs(as), await call(taxRoute.PUT as never, { method: "PUT", path: "/api/price-book/tax-rate", body: { taxRatePercent: "6.625" } })).status,
   },
 ];
 

@@ -20,6 +20,7 @@ const proposalRoute = await import("@/app/api/jobs/[id]/proposal/route");
 const docsRoute = await import("@/app/api/jobs/[id]/documents/route");
 const docRoute = await import("@/app/api/documents/[docId]/route");
 const acceptRoute = await import("@/app/api/documents/[docId]/accept/route");
+const taxRoute = await import("@/app/api/price-book/tax-rate/route");
 const ctx = seededDbForFile();
 
 type Loaded = { version: number; doc: AssessmentDoc };
@@ -147,8 +148,22 @@ describe("the proposal's life: draft, issued, superseded, accepted", () => {
     expect((await ctx.t.db.select().from(proposals).where(eq(proposals.id, d2!.proposalId!)))[0]!.status).toBe("accepted");
   });
 
+  it("the owner sets the sales tax rate as a percentage; a bad one is refused with the field named and nothing changes", async () => {
+    const put = (taxRatePercent: unknown) => (actAs(ids.owner), call<{ taxRatePpm: number; fields?: Record<string, string[]> }>(taxRoute.PUT as never, { method: "PUT", body: { taxRatePercent } }));
+    expect((await put("7")).json.taxRatePpm).toBe(70_000);
+    for (const [bad, why] of [["6.62501", /at most four decimal places/], ["abc", /must be a percentage/], ["-1", /cannot be negative/], ["30", /at most 25 %/], ["", /Enter the sales tax rate/]] as const) {
+      const r = await put(bad);
+      expect(r.status).toBe(422);
+      expect(r.json.fields!.taxRatePercent![0]).toMatch(why);
+    }
+    const [c] = await ctx.t.db.select({ ppm: companies.taxRatePpm }).from(companies).where(eq(companies.slug, "kestrel-bay"));
+    expect(c!.ppm).toBe(70_000);
+    expect((await put("6.625 %")).json.taxRatePpm).toBe(66_250);
+  });
+
   it("keeps a 6.625 % sales tax exactly, on the taxable lines only", async () => {
-    await ctx.t.db.update(companies).set({ taxRatePpm: 66_250 }).where(eq(companies.id, (await ctx.t.db.select().from(companies))[0]!.id));
+    const [c] = await ctx.t.db.select({ ppm: companies.taxRatePpm }).from(companies).where(eq(companies.slug, "kestrel-bay"));
+    expect(c!.ppm).toBe(66_250);
     const { snapshot } = await issue("proposal");
     const p = snapshot.proposal!;
     const taxable = p.lines.filter((l) => l.taxable !== false).reduce((a, l) => a + l.totalCents, 0);

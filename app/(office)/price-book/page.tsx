@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import { PriceBookScreen } from "@/components/price-book/price-book-screen";
+import { TaxRateForm } from "@/components/price-book/tax-rate-form";
 import { can } from "@/lib/authz/permissions";
-import { listPriceBook } from "@/lib/data/price-book";
+import { getTaxRate, listPriceBook } from "@/lib/data/price-book";
 import { requireStaffPage } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Price book" };
@@ -9,7 +10,7 @@ export const metadata: Metadata = { title: "Price book" };
 export default async function PriceBookPage() {
   const user = await requireStaffPage("prices:read");
   const canEdit = can(user.role, "pricebook:manage");
-  const items = await listPriceBook(user);
+  const [items, { taxRatePpm }] = await Promise.all([listPriceBook(user), getTaxRate(user)]);
   return (
     <>
       <div className="mb-6 flex flex-wrap items-center justify-between gap-3">
@@ -30,6 +31,7 @@ export default async function PriceBookPage() {
           </a>
         ) : null}
       </div>
+      <TaxRateForm canEdit={canEdit} initialPpm={taxRatePpm} />
       <PriceBookScreen canEdit={canEdit} initial={{ items }} />
     </>
   );
