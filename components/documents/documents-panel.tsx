@@ -4,18 +4,24 @@ import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
 import type { DocumentSummary } from "@/lib/data/documents";
+import { pdfFileName } from "@/lib/documents/file-name";
 import { fetcher, FetchError, sendJson } from "@/lib/hooks/fetcher";
+import { usePhotos } from "@/lib/hooks/use-photos";
 import { formatDollars } from "@/lib/money";
+import { DownloadPdfButton } from "./download-pdf-button";
+import { orderedChoice, PhotoPicker } from "./photo-picker";
 
 const day = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 const usd = (x: number) => `$${Math.round(x).toLocaleString("en-US")}`;
 
 /** Staff: issue a new version, compare versions' headline figures, open or download each, send to the homeowner. */
-export function DocumentsPanel({ jobId, canIssue }: { jobId: string; canIssue: boolean }) {
+export function DocumentsPanel({ jobId, jobNumber, canIssue }: { jobId: string; jobNumber: number; canIssue: boolean }) {
   const key = `/api/jobs/${jobId}/documents`;
   const { data, mutate } = useSWR<{ documents: DocumentSummary[] }>(key, fetcher);
   const [busy, setBusy] = useState<string | null>(null);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const [chosen, setChosen] = useState<Set<string>>(() => new Set());
+  const jobPhotos = usePhotos(jobId);
 
   async function run(label: string, fn: () => Promise<string>) {
     setBusy(label);
@@ -32,8 +38,10 @@ export function DocumentsPanel({ jobId, canIssue }: { jobId: string; canIssue: b
   }
   const issue = (kind: "savings-report" | "proposal") =>
     run(kind, async () => {
-      const r = await sendJson<{ document: DocumentSummary }>(key, "POST", { kind });
-      return `Issued ${kind === "proposal" ? "proposal" : "savings report"} version ${r.document.version}.`;
+      const photoIds = orderedChoice(jobPhotos.data?.photos ?? [], chosen);
+      const r = await sendJson<{ document: DocumentSummary }>(key, "POST", { kind, photoIds });
+      const withPhotos = photoIds.length ? ` with ${photoIds.length} photo${photoIds.length === 1 ? "" : "s"}` : "";
+      return `Issued ${kind === "proposal" ? "proposal" : "savings report"} version ${r.document.version}${withPhotos}.`;
     });
   const send = () =>
     run("send", async () => {
@@ -45,6 +53,7 @@ export function DocumentsPanel({ jobId, canIssue }: { jobId: string; canIssue: b
   return (
     <section aria-labelledby="docs-h" className="card space-y-4">
       <h2 id="docs-h" className="text-xl font-semibold text-spruce-800">Issued documents</h2>
+      {canIssue ? <PhotoPicker jobId={jobId} chosen={chosen} onChange={setChosen} disabled={busy !== null} /> : null}
       {canIssue ? (
         <div className="flex flex-wrap gap-2">
           <button type="button" className="btn-primary" disabled={busy !== null} onClick={() => void issue("savings-report")}>{busy === "savings-report" ? "Issuing…" : "Issue savings report"}</button>
@@ -67,7 +76,7 @@ export function DocumentsPanel({ jobId, canIssue }: { jobId: string; canIssue: b
               <tr key={d.id} className="border-t border-line">
                 <td className="px-3 py-2 font-semibold">
                   <Link className="text-spruce-700 underline" href={`/jobs/${jobId}/documents/${d.id}`}>{d.kind === "proposal" ? "Proposal" : "Savings report"} v{d.version}</Link>{" "}
-                  <a className="text-spruce-700 underline" href={`/api/documents/${d.id}/pdf`}>PDF</a>
+                  <DownloadPdfButton compact href={`/api/documents/${d.id}/pdf`} fileName={pdfFileName(d.kind, jobNumber, d.version)} label="PDF" />
                 </td>
                 <td className="px-3 py-2">{day.format(d.issuedAt)} · {d.issuedByName}</td>
                 <td className="px-3 py-2 text-right tabular-nums">{usd(d.headline.annualCostBeforeUSD)} / {usd(d.headline.annualCostAfterUSD)}</td>

@@ -1,6 +1,8 @@
 import { ResultsPanel } from "@/components/assessment/results";
 import { costBasisNote, type ReportSnapshot } from "@/lib/documents/snapshot";
 import { ProposalView } from "./proposal-view";
+import { ReportCrew } from "./report-crew";
+import { ReportPhotos } from "./report-photos";
 
 const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long" });
 
@@ -19,6 +21,8 @@ export function ReportView({ snapshot }: { snapshot: ReportSnapshot }) {
       <div className="max-w-2xl">
         <ResultsPanel analysis={s.analysis} units="ip" />
       </div>
+      {s.crewSummary ? <ReportCrew crew={s.crewSummary} thresholds={{ high: s.analysis.input.densePack.highRatio, low: s.analysis.input.densePack.lowRatio }} /> : null}
+      {s.photos?.length ? <ReportPhotos photos={s.photos} /> : null}
       <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">
         These figures are estimates from published methods and the measurements taken at your house; actual savings depend on weather, fuel prices and how the house is used. All work follows local codes and licensed practice.{costBasisNote(s) ? ` ${costBasisNote(s)}` : ""}
       </p>

@@ -111,6 +111,8 @@ describe("choosing photos when issuing", () => {
     const { res, bytes } = await pdfOf(r.json.document.id);
     expect(res.status).toBe(200);
     expect(res.headers.get("content-length")).toBe(String(bytes.length));
+    expect(res.headers.get("x-content-length")).toBe(String(bytes.length));
+    expect(res.headers.get("cache-control")).toContain("no-transform");
     expect(res.headers.get("content-disposition")).toBe(`attachment; filename="warmstead-savings-report-job-1006-v${r.json.document.version}.pdf"`);
     if (process.env.KEEP_PDF) (await import("node:fs")).writeFileSync(`${process.env.KEEP_PDF}/photos.pdf`, bytes);
     const parsed = await pdfText(bytes);

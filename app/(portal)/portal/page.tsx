@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
+import { DownloadPdfButton } from "@/components/documents/download-pdf-button";
 import { StageBadge } from "@/components/jobs/stage-badge";
 import { listDocuments, type DocumentSummary } from "@/lib/data/documents";
+import { pdfFileName } from "@/lib/documents/file-name";
 import { listHomeownerHouses } from "@/lib/data/portal";
 import Link from "next/link";
 import { requireHomeownerPage } from "@/lib/session";
@@ -24,7 +26,7 @@ export default async function PortalPage() {
               </div>
               <StageBadge stage={h.stage} />
             </div>
-            <DocumentList documents={documents.filter((d) => d.jobId === h.jobId)} />
+            <DocumentList documents={documents.filter((d) => d.jobId === h.jobId)} jobNumber={h.number} />
           </li>
         ))}
         {homes.length === 0 ? <li className="card text-ink-muted">No house is linked to your account yet.</li> : null}
@@ -35,7 +37,7 @@ export default async function PortalPage() {
 
 const day = new Intl.DateTimeFormat("en-US", { dateStyle: "medium" });
 
-function DocumentList({ documents }: { documents: DocumentSummary[] }) {
+function DocumentList({ documents, jobNumber }: { documents: DocumentSummary[]; jobNumber: number }) {
   if (documents.length === 0) return <p className="mt-3 text-ink-muted">No documents have been issued yet. When your savings report or proposal is ready, it appears here and you receive an e-mail.</p>;
   return (
     <ul className="mt-4 divide-y divide-line" data-testid="portal-documents">
@@ -44,7 +46,7 @@ function DocumentList({ documents }: { documents: DocumentSummary[] }) {
           <Link href={`/portal/documents/${d.id}`} className="font-semibold text-spruce-700 underline">
             {d.kind === "proposal" ? "Proposal" : "Savings report"}, version {d.version}
           </Link>
-          <span className="text-sm text-ink-muted">{day.format(d.issuedAt)} · {d.accepted ? "accepted" : d.supersededAt ? "replaced by a newer version" : "current"} · <a className="underline" href={`/api/documents/${d.id}/pdf`}>PDF</a></span>
+          <span className="text-sm text-ink-muted">{day.format(d.issuedAt)} · {d.accepted ? "accepted" : d.supersededAt ? "replaced by a newer version" : "current"} · <DownloadPdfButton compact href={`/api/documents/${d.id}/pdf`} fileName={pdfFileName(d.kind, jobNumber, d.version)} label="PDF" /></span>
         </li>
       ))}
     </ul>

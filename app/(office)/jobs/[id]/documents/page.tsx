@@ -18,7 +18,7 @@ export default async function DocumentsPage({ params }: { params: Promise<{ id: 
       <p className="text-sm font-semibold text-ember-700">Job #{job.number}</p>
       <h1 className="text-3xl font-bold text-spruce-900">{job.house.street}</h1>
       <JobTabs jobId={job.id} active="documents" />
-      <DocumentsPanel jobId={job.id} canIssue={can(user.role, "documents:issue")} />
+      <DocumentsPanel jobId={job.id} jobNumber={job.number} canIssue={can(user.role, "documents:issue")} />
     </>
   );
 }

@@ -2,8 +2,10 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AcceptForm } from "@/components/documents/accept-form";
+import { DownloadPdfButton } from "@/components/documents/download-pdf-button";
 import { ReportView } from "@/components/documents/report-view";
 import { getDocument } from "@/lib/data/documents";
+import { pdfFileName } from "@/lib/documents/file-name";
 import { formatDollars } from "@/lib/money";
 import { requireHomeownerPage } from "@/lib/session";
 
@@ -18,7 +20,7 @@ export default async function PortalDocumentPage({ params }: { params: Promise<{
   const s = doc.snapshot;
   return (
     <>
-      <p className="mb-4 text-sm"><Link href="/portal" className="text-spruce-700 underline">← My home</Link> · <a className="font-semibold text-spruce-700 underline" href={`/api/documents/${doc.id}/pdf`} download>Download PDF</a></p>
+      <div className="mb-4 flex flex-wrap items-center gap-3 text-sm"><Link href="/portal" className="text-spruce-700 underline">← My home</Link> <DownloadPdfButton href={`/api/documents/${doc.id}/pdf`} fileName={pdfFileName(doc.kind, s.job.number, doc.version)} /></div>
       {doc.supersededAt ? <p className="mb-4 rounded-md bg-warn-bg px-3 py-2 text-warn">A newer version of this document has been issued to you; this one is kept for your records.</p> : null}
       <ReportView snapshot={s} />
       {s.kind === "proposal" ? (

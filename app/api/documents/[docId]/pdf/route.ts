@@ -8,7 +8,8 @@ export const runtime = "nodejs";
 
 /**
  * The issued document as a PDF, drawn from the same frozen snapshot as the on-screen view, with
- * the chosen photos' thumbnails embedded. Content-Length lets the download button show progress.
+ * the chosen photos' thumbnails embedded. The length (Content-Length, and X-Content-Length, which
+ * survives the server) lets the download button show progress.
  */
 export const GET = withAuth<{ docId: string }>(
   async (_req, { user, params }) => {
@@ -18,8 +19,12 @@ export const GET = withAuth<{ docId: string }>(
       headers: {
         "content-type": "application/pdf",
         "content-length": String(pdf.length),
+        // Next's route layer drops Content-Length before the response leaves `next start`
+        // (node_modules/next/dist/server/send-response.js); the download button reads this copy.
+        "x-content-length": String(pdf.length),
         "content-disposition": `attachment; filename="${pdfFileName(doc.kind, doc.snapshot.job.number, doc.version)}"`,
-        "cache-control": "private, no-store",
+        // no-transform: the server's gzip would drop Content-Length (and PDF streams are compressed already)
+        "cache-control": "private, no-store, no-transform",
         "x-content-hash": doc.contentHash,
       },
     });
