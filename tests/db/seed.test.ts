@@ -27,7 +27,7 @@ describe("seed", () => {
     const first = await counts(t);
     await seedDatabase(t.db);
     expect(await counts(t)).toEqual(first);
-    expect(first).toMatchObject({ companies: 1, users: 8, jobs: 8, price_book_items: 6 });
+    expect(first).toMatchObject({ companies: 1, users: 8, jobs: 8, price_book_items: 7 });
   });
 
   it("has every demo account, signing in with the shared demo password", async () => {
@@ -84,7 +84,7 @@ describe("seed", () => {
 
   it("prices the price book in whole cents", async () => {
     const items = await t.db.query.priceBookItems.findMany();
-    expect(items.map((i) => i.unit).sort()).toEqual(["bag", "ft2", "hole", "hour", "hour", "permit"]);
+    expect(items.map((i) => i.unit).sort()).toEqual(["bag", "each", "ft2", "hole", "hour", "hour", "permit"]);
     for (const item of items) expect(Number.isInteger(item.unitPriceCents)).toBe(true);
   });
 });
