@@ -16,5 +16,8 @@ export default defineConfig({
     testTimeout: 20_000,
     hookTimeout: 60_000,
     pool: "forks",
+    // next-auth imports "next/server" without an extension, which Node's own ESM loader cannot
+    // resolve; bundling it through Vite lets tests load lib/auth for real.
+    server: { deps: { inline: ["next-auth"] } },
   },
 });

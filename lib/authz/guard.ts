@@ -1,11 +1,11 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import type { NextRequest } from "next/server";
-import { getDb } from "@/db";
+import { getDb, type Db } from "@/db";
 import { users } from "@/db/schema";
 import { ApiError, forbidden, unauthorized } from "@/lib/api/errors";
 import { errorResponse } from "@/lib/api/respond";
-import { auth } from "@/lib/auth";
+import { sessionUserId } from "@/lib/auth";
 import { can, type Permission, type RoleName } from "./permissions";
 
 export type AuthUser = {
@@ -17,15 +17,26 @@ export type AuthUser = {
   unitSystem: "ip" | "si";
 };
 
+const buildUserById = (db: Db) =>
+  db
+    .select({ id: users.id, companyId: users.companyId, role: users.role, name: users.name, email: users.email, unitSystem: users.unitSystem, disabled: users.disabled })
+    .from(users).where(eq(users.id, sql.placeholder("id"))).prepare();
+// Prepared once per database: this runs on every request.
+const userStatements = new WeakMap<Db, ReturnType<typeof buildUserById>>();
+function userById(db: Db) {
+  let st = userStatements.get(db);
+  if (!st) userStatements.set(db, (st = buildUserById(db)));
+  return st;
+}
+
 /**
  * The signed-in user, read fresh from the database on every request: a disabled account or a
  * changed role takes effect on the next request, whatever the session cookie still says.
  */
 export async function getSessionUser(): Promise<AuthUser | null> {
-  const session = await auth();
-  const id = session?.user?.id;
+  const id = await sessionUserId();
   if (!id) return null;
-  const [row] = await getDb().select().from(users).where(eq(users.id, id));
+  const [row] = await userById(getDb()).execute({ id });
   if (!row || row.disabled) return null;
   return { id: row.id, companyId: row.companyId, role: row.role, name: row.name, email: row.email, unitSystem: row.unitSystem };
 }

@@ -1,12 +1,12 @@
 import "server-only";
 import { and, asc, count, desc, eq, inArray, max, sql } from "drizzle-orm";
-import { getDb } from "@/db";
+import { getDb, type Db } from "@/db";
 import { clients, houses, jobCrew, jobs, jobStageEvents, users, type JobStage } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import type { JobListQuery, JobPatch, NewJobInput } from "@/lib/validation/job";
 import { logActivity } from "./activity";
-import { jobScope } from "./scope";
+import { jobScope, jobScopePrepared, scopeParams } from "./scope";
 
 export type JobListRow = {
   id: string;
@@ -27,25 +27,42 @@ const sortColumns = {
 } as const;
 
 /**
- * Search through the `job_search` full-text index (migration 0001: client name, street, town, title,
- * number). Three or more characters use the trigram index; shorter terms scan it with LIKE.
+ * How a search is run. Both indexes hold the job number, title, client name, street and town and
+ * are kept by triggers (migrations 0001 and 0006):
+ * - "words": every word typed is the beginning of a word of the job (`job_words`, reads only the
+ *   matching words' entries: "birch 12" finds 12 Birchwood Road);
+ * - "substring": the text anywhere (`job_search`, trigrams), tried when words find nothing;
+ * - "like": one or two characters that are not a word, scanned with LIKE.
  */
-function matchesSearch(q: string) {
-  const term = q.length >= 3 ? `"${q.replace(/"/g, '""')}"` : `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-  const test = q.length >= 3 ? sql`job_search match ${term}` : sql`body like ${term} escape '\\'`;
-  return sql`${jobs}.rowid in (select rowid from job_search where ${test})`;
+type SearchKind = "none" | "words" | "substring" | "like";
+type Search = { kind: SearchKind; term?: string };
+
+function searchPlan(q: string | undefined): Search {
+  if (!q) return { kind: "none" };
+  const words = q.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
+  if (words.length) return { kind: "words", term: words.map((w) => `"${w}"*`).join(" ") };
+  return substringPlan(q);
+}
+function substringPlan(q: string): Search {
+  return q.length >= 3 ? { kind: "substring", term: `"${q.replace(/"/g, '""')}"` } : { kind: "like", term: `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` };
 }
 
-export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ jobs: JobListRow[]; total: number }> {
-  const db = getDb();
-  const conditions = [jobScope(db, user)];
-  if (query.stage) conditions.push(eq(jobs.stage, query.stage));
-  if (query.q) conditions.push(matchesSearch(query.q));
+function matchesSearch(kind: Exclude<SearchKind, "none">) {
+  const term = sql.placeholder("term");
+  if (kind === "words") return sql`${jobs}.rowid in (select rowid from job_words where job_words match ${term})`;
+  if (kind === "substring") return sql`${jobs}.rowid in (select rowid from job_search where job_search match ${term})`;
+  return sql`${jobs}.rowid in (select rowid from job_search where body like ${term} escape '\\')`;
+}
+
+/** The list and count statements for one shape of query (role, filters, sort), with placeholders. */
+function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind) {
+  const conditions = [jobScopePrepared(db, role)];
+  if (query.stage) conditions.push(eq(jobs.stage, sql.placeholder("stage")));
+  if (search !== "none") conditions.push(matchesSearch(search));
   const where = and(...conditions);
   const order = query.dir === "asc" ? asc(sortColumns[query.sort]) : desc(sortColumns[query.sort]);
-
-  const [rows, [{ total }]] = await Promise.all([
-    db
+  return {
+    list: db
       .select({
         id: jobs.id,
         number: jobs.number,
@@ -63,14 +80,43 @@ export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ j
       .leftJoin(users, eq(users.id, jobs.auditorId))
       .where(where)
       .orderBy(order, desc(jobs.number))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+      .limit(sql.placeholder("limit"))
+      .offset(sql.placeholder("offset"))
+      .prepare(),
     // Every job has its client and house (foreign keys), so the count needs no joins.
-    db.select({ total: count() }).from(jobs).where(where),
-  ]);
+    count: db.select({ total: count() }).from(jobs).where(where).prepare(),
+  };
+}
+
+// Prepared once per database and shape, then reused: building and preparing the statements cost
+// more than running them (bench/jobs.ts).
+const prepared = new WeakMap<Db, Map<string, ReturnType<typeof buildListStatements>>>();
+function listStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind) {
+  const key = `${role}|${query.stage ? "stage" : ""}|${search}|${query.sort}|${query.dir}`;
+  let perDb = prepared.get(db);
+  if (!perDb) prepared.set(db, (perDb = new Map()));
+  let st = perDb.get(key);
+  if (!st) perDb.set(key, (st = buildListStatements(db, role, query, search)));
+  return st;
+}
+
+export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ jobs: JobListRow[]; total: number }> {
+  const plan = searchPlan(query.q);
+  const found = await runList(user, query, plan);
+  // Nothing begins with what was typed: look for it anywhere in the text instead.
+  if (found.total === 0 && plan.kind === "words" && query.q) return runList(user, query, substringPlan(query.q));
+  return found;
+}
+
+async function runList(user: AuthUser, query: JobListQuery, search: Search) {
+  const st = listStatements(getDb(), user.role, query, search.kind);
+  const params = { ...scopeParams(user), stage: query.stage, term: search.term, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+  const rows = await st.list.execute(params);
+  // A first page that is not full is the whole list: no need to count.
+  const total = query.page === 1 && rows.length < query.pageSize ? rows.length : (await st.count.execute(params))[0]!.total;
   return {
     total,
-    jobs: rows.map(({ street, city, updatedAt, ...r }) => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),
+    jobs: rows.map(({ street, city, updatedAt, ...r }): JobListRow => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),
   };
 }
 

@@ -85,8 +85,19 @@ describe("savings report and proposal", () => {
     await page.getByRole("link", { name: /^Proposal, version/ }).first().click();
     const total = await page.getByTestId("proposal-total").textContent();
     expect(total).toMatch(/^\$[\d,]+\.\d\d$/);
-    // The button: "Preparing the PDF…" while the server renders (button disabled), then the file is saved.
+    // Failures are said in words and leave the button usable: the server's reason, or a dropped line.
     const box = page.getByTestId("pdf-download");
+    await page.route("**/api/documents/*/pdf", (r) => r.fulfill({ status: 500, contentType: "application/json", body: JSON.stringify({ error: "Something went wrong on our side." }) }));
+    await box.getByRole("button", { name: "Download PDF" }).click();
+    await box.getByRole("status").getByText("Something went wrong on our side.").waitFor();
+    await page.unroute("**/api/documents/*/pdf");
+    await page.route("**/api/documents/*/pdf", (r) => r.abort("internetdisconnected"));
+    await box.getByRole("button", { name: "Download PDF" }).click();
+    await box.getByRole("status").getByText(/The download was interrupted: check your connection/).waitFor();
+    await page.unroute("**/api/documents/*/pdf");
+    expect(await box.getByRole("button", { name: "Download PDF" }).isEnabled()).toBe(true);
+
+    // The button: "Preparing the PDF…" while the server renders (button disabled), then the file is saved.
     await box.evaluate((el) => {
       const seen: string[] = [];
       (window as unknown as { pdfStates: string[] }).pdfStates = seen;

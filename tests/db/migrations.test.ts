@@ -25,13 +25,15 @@ describe("migrations", () => {
     const db = createDb(url);
     try {
       const { rows } = await db.$client.execute(
-        // job_search (migration 0001) is an FTS5 index, not a schema table: it and its shadow tables are left out here.
-        "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name <> '__drizzle_migrations' and name not like 'job_search%' order by name",
+        // job_search and job_words (migrations 0001, 0006) are FTS5 indexes, not schema tables: they and their shadow tables are left out here.
+        "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name <> '__drizzle_migrations' and name not like 'job_search%' and name not like 'job_words%' order by name",
       );
       expect(rows.map((r) => r.name)).toEqual(schemaTables);
       expect(schemaTables).toHaveLength(26);
-      const fts = await db.$client.execute("select sql from sqlite_master where name = 'job_search'");
-      expect(String(fts.rows[0]?.sql)).toMatch(/fts5/i);
+      for (const name of ["job_search", "job_words"]) {
+        const fts = await db.$client.execute({ sql: "select sql from sqlite_master where name = ?", args: [name] });
+        expect(String(fts.rows[0]?.sql)).toMatch(/fts5/i);
+      }
     } finally {
       db.$client.close();
     }

@@ -32,6 +32,16 @@ describe("GET /api/jobs", () => {
     expect((await list("q=%25")).json.total).toBe(0); // a literal % matches nothing, not everything
   });
 
+  it("matches the beginnings of words, in any order, and falls back to any substring", async () => {
+    actAs(ids.auditor);
+    const numbers = async (q: string) => (await list(`q=${encodeURIComponent(q)}`)).json.jobs.map((j) => j.number);
+    expect(await numbers("tansy")).toEqual([1006]); // a word beginning (job_words)
+    expect(await numbers("Road 27 tansy")).toEqual([1006]); // every word, any order
+    expect(await numbers("ansyfie")).toEqual([1006]); // inside a word: no word begins so, the trigram index finds it
+    expect(await numbers("tansy nowhere")).toEqual([]); // a word that matches nothing rules the job out
+    expect(await numbers('"')).toEqual([]); // punctuation alone is not a syntax error
+  });
+
   it("filters by stage, sorts and paginates", async () => {
     actAs(ids.owner);
     const intake = await list("stage=intake");

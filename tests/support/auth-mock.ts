@@ -9,6 +9,8 @@ export function actAs(userId: string | null) {
 }
 
 export const auth = vi.fn(async () => (currentUserId ? { user: { id: currentUserId }, expires: new Date(Date.now() + 3600_000).toISOString() } : null));
+export const sessionUserId = vi.fn(async () => currentUserId);
+export const SESSION_COOKIE = "authjs.session-token";
 export const signIn = vi.fn();
 export const signOut = vi.fn();
 export const handlers = { GET: vi.fn(), POST: vi.fn() };
