@@ -96,7 +96,8 @@ describe("choosing photos when issuing", () => {
     const plainSnapshot = await snapshotOf(plain.json.document.id);
     expect([plainSnapshot.photoIds, plainSnapshot.photos]).toEqual([[], undefined]);
     expect(plainSnapshot.crewSummary).toBeUndefined(); // nobody has logged anything yet
-    const plainPdf = await pdfText((await pdfOf(plain.json.document.id)).bytes);
+    const plainBytes = (await pdfOf(plain.json.document.id)).bytes;
+    const plainPdf = await pdfText(plainBytes);
 
     const r = await issue({ kind: "savings-report", photoIds: [after, before, thermal, before] });
     expect(r.status).toBe(201);
@@ -123,8 +124,18 @@ describe("choosing photos when issuing", () => {
     expect(parsed.text).not.toContain("Image not available");
     // three embedded JPEGs (thumbnails re-encoded), and still a light file
     expect(bytes.toString("latin1").match(/\/Filter \/DCTDecode/g)?.length).toBe(3);
-    expect(bytes.length - (await pdfOf(plain.json.document.id)).bytes.length).toBeLessThan(3 * 120_000);
-  });
+    expect(bytes.length - plainBytes.length).toBeLessThan(3 * 120_000);
+  }, 60_000); // two PDF renders, the first one cold
+
+  it("a proposal issued with photos shows them in its appended savings-report pages", async () => {
+    const r = await issue({ kind: "proposal", photoIds: [before, after] });
+    expect(r.status).toBe(201);
+    const { bytes } = await pdfOf(r.json.document.id);
+    const parsed = await pdfText(bytes);
+    expect(parsed.text).toContain("Photos from your house");
+    expect(parsed.text).toContain("North wall patched and painted");
+    expect(bytes.toString("latin1").match(/\/Filter \/DCTDecode/g)?.length).toBe(2);
+  }, 40_000);
 });
 
 describe("the crew log in the final report", () => {
@@ -166,7 +177,7 @@ describe("the crew log in the final report", () => {
 
     const next = await snapshotOf((await issue({ kind: "savings-report" })).json.document.id);
     expect(next.crewSummary!.bags.logged).toBeCloseTo(c.bags.logged + 2, 9);
-  });
+  }, 40_000);
 
   it("carries the test-out reading, measured against predicted", async () => {
     actAs(ids.installer);
