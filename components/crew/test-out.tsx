@@ -1,77 +1,31 @@
 "use client";
 
-import { useEffect, useState } from "react";
 import type { TestOutResult } from "@/lib/data/crew-log";
-import { FetchError, sendJson } from "@/lib/hooks/fetcher";
-import { intText } from "./format";
+import { useTestOut, type TestOutDraft } from "@/lib/hooks/use-test-out";
+import { intText, whenText } from "./format";
 
-type Draft = { cfm50: string; outdoorTempF: string; windMph: string; notes: string; clientRequestId: string };
-const key = (jobId: string) => `warmstead:test-out-draft:${jobId}`;
-const fresh = (): Draft => ({ cfm50: "", outdoorTempF: "", windMph: "", notes: "", clientRequestId: crypto.randomUUID() });
+type FieldName = Exclude<keyof TestOutDraft, "clientRequestId">;
 
 /**
- * The test-out reading. What is typed stays on the phone until the server accepts it, with the same
- * clientRequestId, so pressing Record again after a lost connection records it once.
+ * The test-out reading. Record keeps it on the phone first and then sends it; with no connection it
+ * waits there, shown as pending, and goes by itself when the phone is back online. Every resend has
+ * the same clientRequestId, so a reading whose answer was lost is recorded once.
  */
 export function TestOutForm({ jobId, onRecorded }: { jobId: string; onRecorded: () => void }) {
-  const [draft, setDraft] = useState<Draft | null>(null);
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
-  const [busy, setBusy] = useState(false);
-  useEffect(() => {
-    let d: Draft | null = null;
-    try {
-      const raw = localStorage.getItem(key(jobId));
-      d = raw ? (JSON.parse(raw) as Draft) : null;
-    } catch {
-      d = null;
-    }
-    // eslint-disable-next-line react-hooks/set-state-in-effect
-    setDraft(d ?? fresh());
-  }, [jobId]);
-  if (!draft) return null;
-  const change = (patch: Partial<Draft>) => {
-    const next = { ...draft, ...patch };
-    setDraft(next);
-    try {
-      localStorage.setItem(key(jobId), JSON.stringify(next));
-    } catch {
-      // storage blocked: kept in memory
-    }
-  };
-  const numOrText = (s: string) => (s.trim() === "" ? undefined : Number.isFinite(Number(s)) ? Number(s) : s);
+  const t = useTestOut(jobId, onRecorded);
+  if (!t.draft) return null;
+  const { draft, queued, errors } = t;
+  const locked = Boolean(queued);
 
-  const submit = async (e: React.FormEvent) => {
+  const submit = (e: React.FormEvent) => {
     e.preventDefault();
-    setBusy(true);
-    setMessage(null);
-    try {
-      const r = await sendJson<{ movedToVerified: boolean; replayed: boolean }>(`/api/jobs/${jobId}/test-out`, "POST", {
-        clientRequestId: draft.clientRequestId, cfm50: numOrText(draft.cfm50), outdoorTempF: numOrText(draft.outdoorTempF), windMph: numOrText(draft.windMph), notes: draft.notes.trim() || undefined,
-      });
-      setErrors({});
-      localStorage.removeItem(key(jobId));
-      setDraft(fresh());
-      setMessage({ kind: "ok", text: r.movedToVerified ? "Test-out recorded. The job is now Verified." : "Test-out recorded." });
-      onRecorded();
-    } catch (err) {
-      if (err instanceof FetchError && err.status === 422) {
-        setErrors((err.body.fields as Record<string, string[]>) ?? {});
-        setMessage({ kind: "error", text: "Check the fields marked below." });
-      } else if (err instanceof FetchError && err.status < 500) {
-        setMessage({ kind: "error", text: err.message });
-      } else {
-        setMessage({ kind: "error", text: "Not sent: no connection or the server did not answer. The reading is kept on this phone; press Record test-out again." });
-      }
-    } finally {
-      setBusy(false);
-    }
+    t.record();
   };
 
-  const field = (name: keyof Draft, label: string, mode: "decimal" | "text", hint?: string) => (
+  const field = (name: FieldName, label: string, hint?: string) => (
     <div>
       <label htmlFor={`to-${name}`} className="field-label">{label}</label>
-      <input id={`to-${name}`} className="field-input min-h-12 text-lg" inputMode={mode === "decimal" ? "decimal" : undefined} value={draft[name]} onChange={(e) => change({ [name]: e.target.value })} aria-invalid={errors[name] ? true : undefined} aria-describedby={`to-${name}-error`} />
+      <input id={`to-${name}`} className="field-input min-h-12 text-lg read-only:bg-paper-deep" inputMode="decimal" value={draft[name]} readOnly={locked} onChange={(e) => t.change({ [name]: e.target.value })} aria-invalid={errors[name] ? true : undefined} aria-describedby={`to-${name}-error`} />
       {hint ? <p className="mt-1 text-sm text-ink-muted">{hint}</p> : null}
       <p id={`to-${name}-error`} aria-live="polite" className="field-error">{errors[name]?.join(" ")}</p>
     </div>
@@ -82,18 +36,32 @@ export function TestOutForm({ jobId, onRecorded }: { jobId: string; onRecorded: 
       <h2 id="test-out-title" className="text-xl font-bold text-spruce-900">Record test-out</h2>
       <p className="mt-1 text-ink-muted">The blower-door reading after the work. Recording it on an installing job moves the job to Verified.</p>
       <div className="mt-3 grid grid-cols-1 gap-3 sm:grid-cols-3">
-        {field("cfm50", "CFM50", "decimal", "Airflow at 50 Pa, CFM")}
-        {field("outdoorTempF", "Outdoor temperature (°F)", "decimal")}
-        {field("windMph", "Wind (mph)", "decimal")}
+        {field("cfm50", "CFM50", "Airflow at 50 Pa, CFM")}
+        {field("outdoorTempF", "Outdoor temperature (°F)")}
+        {field("windMph", "Wind (mph)")}
       </div>
       <div className="mt-1">
         <label htmlFor="to-notes" className="field-label">Notes (optional)</label>
-        <textarea id="to-notes" className="field-input min-h-20" value={draft.notes} onChange={(e) => change({ notes: e.target.value })} maxLength={1000} />
-        <p className="field-error">{errors.notes?.join(" ")}</p>
+        <textarea id="to-notes" className="field-input min-h-20 read-only:bg-paper-deep" value={draft.notes} readOnly={locked} onChange={(e) => t.change({ notes: e.target.value })} maxLength={1000} aria-invalid={errors.notes ? true : undefined} aria-describedby="to-notes-error" />
+        <p id="to-notes-error" aria-live="polite" className="field-error">{errors.notes?.join(" ")}</p>
       </div>
+      {errors.clientRequestId || errors.testedAt ? <p className="field-error">{[...(errors.clientRequestId ?? []), ...(errors.testedAt ?? [])].join(" ")}</p> : null}
       <p className="text-sm text-ink-muted">Where air sealing was done, run combustion-safety tests on the appliances as local codes and licensed practice require.</p>
-      <button type="submit" className="btn-accent mt-3 min-h-14 w-full text-lg" disabled={busy}>{busy ? "Recording…" : "Record test-out"}</button>
-      {message ? <p role={message.kind === "error" ? "alert" : "status"} className={`mt-3 rounded-md px-3 py-2 ${message.kind === "error" ? "bg-danger-bg text-danger" : "bg-spruce-50 text-spruce-800"}`}>{message.text}</p> : null}
+      {queued ? (
+        <div className="mt-3 rounded-md bg-warn-bg px-3 py-2 text-warn" role="status" data-testid="test-out-pending">
+          <p className="font-semibold">
+            Test-out pending on this phone{t.online ? (t.sending ? " — sending…" : "") : " — offline"}
+          </p>
+          <p className="mt-1 text-sm">
+            {typeof queued.body.cfm50 === "number" ? `${intText(queued.body.cfm50)} CFM50, ` : ""}taken {whenText(queued.queuedAt)}. It is kept here and sent by itself when the connection is back; sending it again never records it twice.
+          </p>
+          {t.lastError ? <p className="mt-1 text-sm" data-testid="test-out-pending-reason">{t.lastError}</p> : null}
+          <button type="button" className="btn-ghost mt-2 min-h-12 w-full" onClick={() => void t.retry()} disabled={t.sending}>Send now</button>
+        </div>
+      ) : (
+        <button type="submit" className="btn-accent mt-3 min-h-14 w-full text-lg" disabled={t.sending}>{t.sending ? "Recording…" : "Record test-out"}</button>
+      )}
+      {t.message && !queued ? <p role={t.message.kind === "error" ? "alert" : "status"} className={`mt-3 rounded-md px-3 py-2 ${t.message.kind === "error" ? "bg-danger-bg text-danger" : "bg-spruce-50 text-spruce-800"}`}>{t.message.text}</p> : null}
     </form>
   );
 }

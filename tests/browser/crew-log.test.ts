@@ -1,6 +1,7 @@
 // The install day on a 390 px phone: the installer opens Today → job 1006's crew log, acknowledges the
 // safety prompt, logs two walls (one over 1.3× expected → the overfill warning), keeps an entry through
-// a dropped connection, records a test-out; then the auditor sees the log and the measured result.
+// a dropped connection, records a test-out offline (and once only, though its first answer is lost);
+// then the auditor sees the log and the measured result.
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoJobId } from "@/db/seed-scenario";
@@ -128,9 +129,39 @@ describe("crew log on a phone", () => {
     await form.getByLabel("Outdoor temperature (°F)").fill("38");
     await form.getByLabel("Wind (mph)").fill("6");
     await form.getByLabel("Notes (optional)").fill("Attic hatch weatherstripped; furnace draft checked.");
+
+    // Recorded in a basement with no signal: the reading waits on the phone, shown as pending.
+    await context.setOffline(true);
     await form.getByRole("button", { name: "Record test-out" }).click();
+    const pendingTestOut = form.getByTestId("test-out-pending");
+    await pendingTestOut.getByText(/Test-out pending on this phone — offline/).waitFor();
+    await expect(pendingTestOut.textContent()).resolves.toMatch(/2,350 CFM50/);
+    await expect(form.getByLabel("CFM50").inputValue()).resolves.toBe("2350"); // what was typed stays on screen
+    await pendingTestOut.scrollIntoViewIfNeeded();
+    await snap(page, "crew-test-out-pending-phone");
+    await expect(smallTargets(page, "[data-testid=test-out-form]")).resolves.toEqual([]);
+
+    // Back online, but the first answer is lost on the way (a gateway times out after the server
+    // has stored the reading): the phone keeps it pending; the next send is answered from the stored one.
+    let lostAnswers = 0;
+    await page.route("**/api/jobs/*/test-out", async (route) => {
+      if (lostAnswers > 0) return route.fallback();
+      lostAnswers++;
+      const reached = await route.fetch(); // reaches the server and records the reading …
+      expect(reached.status()).toBe(201);
+      await route.fulfill({ status: 504, contentType: "application/json", body: "{}" }); // … but the phone hears only a timeout
+    });
+    await context.setOffline(false);
+    await pendingTestOut.getByTestId("test-out-pending-reason").getByText(/did not take it \(504\)/).waitFor({ timeout: 30_000 });
+    expect(lostAnswers).toBe(1);
+    await page.unroute("**/api/jobs/*/test-out");
+    await pendingTestOut.getByRole("button", { name: "Send now" }).click();
     await form.getByText("Test-out recorded. The job is now Verified.").waitFor();
-    await expect(page.getByTestId("measured-cfm50").textContent()).resolves.toBe("2,350");
+    await expect(form.getByTestId("test-out-pending").count()).resolves.toBe(0);
+    await expect(form.getByLabel("CFM50").inputValue()).resolves.toBe(""); // a fresh form for a later reading
+    await expect.poll(() => page.getByTestId("measured-cfm50").textContent()).toBe("2,350");
+    const assessment = (await (await office.page.request.get(`/api/jobs/${demoJobId}/assessment`)).json()) as { doc: { leakage: { tests: { phase: string; cfm50: number }[] } } };
+    expect(assessment.doc.leakage.tests.filter((t) => t.phase === "test-out").map((t) => t.cfm50)).toEqual([2350]); // one reading, not two
     await page.getByTestId("test-out-result").scrollIntoViewIfNeeded();
     await snap(page, "crew-test-out-phone");
     await context.close();
