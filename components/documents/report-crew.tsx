@@ -27,7 +27,7 @@ export function ReportCrew({ crew, thresholds }: { crew: CrewSummarySnapshot; th
             <p className="text-sm">
               {to.predictedCfm50 !== null ? `Predicted ${n(to.predictedCfm50)} CFM50` : "No prediction"}
               {to.testInCfm50 !== null ? `; ${n(to.testInCfm50)} CFM50 at test-in` : ""}
-              {to.measuredReductionPct !== null ? `, ${n(to.measuredReductionPct)} % less` : ""}. Tested {day.format(to.testedAt)}.
+              {to.measuredReductionPct !== null ? `, ${n(to.measuredReductionPct)}\u00a0% less` : ""}. Tested {day.format(to.testedAt)}.
             </p>
           </div>
         ) : null}

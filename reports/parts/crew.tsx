@@ -22,7 +22,7 @@ export function CrewSection({ crew, thresholds }: { crew: CrewSummarySnapshot; t
               label="Air leakage at test-out"
               value={t.num(to.measuredCfm50)}
               unit="CFM50 measured"
-              detail={`${to.predictedCfm50 !== null ? `Predicted ${t.num(to.predictedCfm50)} CFM50` : "No prediction"}${to.testInCfm50 !== null ? `; ${t.num(to.testInCfm50)} CFM50 at test-in` : ""}${to.measuredReductionPct !== null ? `, ${t.num(to.measuredReductionPct)} % less` : ""}. Tested ${t.date(to.testedAt)}.`}
+              detail={`${to.predictedCfm50 !== null ? `Predicted ${t.num(to.predictedCfm50)} CFM50` : "No prediction"}${to.testInCfm50 !== null ? `; ${t.num(to.testInCfm50)} CFM50 at test-in` : ""}${to.measuredReductionPct !== null ? `, ${t.num(to.measuredReductionPct)}\u00a0% less` : ""}. Tested ${t.date(to.testedAt)}.`}
               tone="ember"
             />
           ) : null}
