@@ -23,7 +23,22 @@ describe("price book", () => {
     const { page, context } = await newPage(browser);
     await openPriceBook(page, "owner@kestrelbay.example");
     await page.getByTestId("item-CEL-BAG").getByText("$16.50").waitFor();
-    await expect(page.getByTestId("price-book-rows").locator("tr").count()).resolves.toBe(6);
+    await expect(page.getByTestId("price-book-rows").locator("tr").count()).resolves.toBe(7);
+
+    // The sales tax rate keeps thousandths of a percent; a rate with too many decimals is refused beside the field.
+    const tax = page.getByTestId("tax-rate-form");
+    await tax.getByTestId("tax-rate").getByText("6.625 %").waitFor();
+    await tax.getByLabel("Sales tax rate (%)").fill("6.62501");
+    await tax.getByRole("button", { name: "Save rate" }).click();
+    await tax.getByTestId("error-taxRatePercent").getByText("Sales tax rate can have at most four decimal places (e.g. 6.6250).").waitFor();
+    await expect(tax.getByLabel("Sales tax rate (%)").inputValue()).resolves.toBe("6.62501");
+    await tax.getByLabel("Sales tax rate (%)").fill("7.125");
+    await tax.getByRole("button", { name: "Save rate" }).click();
+    await tax.getByTestId("tax-rate").getByText("7.125 %").waitFor();
+    expect((await (await page.request.get("/api/price-book/tax-rate")).json()).taxRatePpm).toBe(71_250);
+    await tax.getByLabel("Sales tax rate (%)").fill("6.625");
+    await tax.getByRole("button", { name: "Save rate" }).click();
+    await tax.getByTestId("tax-rate").getByText("6.625 %").waitFor();
 
     const add = page.getByTestId("add-item-form");
     await add.getByLabel("Code").fill("vapour-paint");
@@ -77,7 +92,7 @@ describe("price book", () => {
     // Retire an item instead of deleting it; it can come back.
     await page.getByRole("button", { name: "Deactivate PERMIT" }).click();
     await page.getByTestId("item-PERMIT").getByText("Inactive", { exact: true }).waitFor();
-    await expect(page.getByTestId("price-book-count").textContent()).resolves.toBe("7 items, 1 inactive");
+    await expect(page.getByTestId("price-book-count").textContent()).resolves.toBe("8 items, 1 inactive");
     await snap(page, "price-book-owner-desktop");
 
     // What the page shows is what the API stores.
