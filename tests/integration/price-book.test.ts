@@ -25,11 +25,11 @@ const celluloseId = seedId("price:CEL-BAG");
 const good = { code: "soffit-baffle", name: "Soffit baffle", kind: "material", unit: "each", unitPrice: "3.75" };
 
 describe("GET /api/price-book", () => {
-  it("lists the six seeded items of the company, prices in cents, active first then by code", async () => {
+  it("lists the seven seeded items of the company, prices in cents, active first then by code", async () => {
     actAs(ids.owner);
     const r = await list();
     expect(r.status).toBe(200);
-    expect(r.json.items.map((i) => i.code)).toEqual(["AIR-SEAL", "ATTIC-BLOWN", "CEL-BAG", "DRILL-PLUG", "LAB-INS", "PERMIT"]);
+    expect(r.json.items.map((i) => i.code)).toEqual(["AIR-SEAL", "ATTIC-BLOWN", "CEL-BAG", "DRILL-PLUG", "LAB-INS", "PERMIT", "WINDOW"]);
     const cellulose = r.json.items.find((i) => i.code === "CEL-BAG")!;
     expect(cellulose).toMatchObject({ name: "Dense-pack cellulose", kind: "material", unit: "bag", unitPriceCents: 1650, taxable: true, active: true });
     expect(typeof cellulose.updatedAt).toBe("number");
@@ -38,7 +38,7 @@ describe("GET /api/price-book", () => {
 
   it("lets an auditor read it too", async () => {
     actAs(ids.auditor);
-    expect((await list()).json.items).toHaveLength(6);
+    expect((await list()).json.items).toHaveLength(7);
     expect((await get(celluloseId)).json.item.code).toBe("CEL-BAG");
   });
 
