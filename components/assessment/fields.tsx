@@ -3,7 +3,17 @@
 import { useId, useState } from "react";
 import { useAssessmentCtx } from "./context";
 
-type Base = { path: string; label: string; hint?: string; className?: string };
+type Base = {
+  path: string;
+  label: string;
+  hint?: string;
+  className?: string;
+  /** In a table cell: the label is read by screen readers (and tests) but not drawn; the column header shows it. */
+  compact?: boolean;
+};
+
+const labelClass = (compact?: boolean) => (compact ? "sr-only" : "field-label");
+const inputClass = (compact?: boolean) => (compact ? "field-input min-h-10 px-2 py-1.5" : "field-input");
 
 function Messages({ id, path, extra }: { id: string; path: string; extra?: string | null }) {
   const { issues, warnings } = useAssessmentCtx();
@@ -21,7 +31,7 @@ function Messages({ id, path, extra }: { id: string; path: string; extra?: strin
  * A number input that keeps exactly what was typed: only a finite number is committed to the
  * document; anything else stays in the box with its reason beside it until it is fixed.
  */
-export function NumField({ path, label, hint, className, value, onValue, step }: Base & { value: number | null | undefined; onValue: (n: number | null) => void; step?: string }) {
+export function NumField({ path, label, hint, className, compact, value, onValue, step }: Base & { value: number | null | undefined; onValue: (n: number | null) => void; step?: string }) {
   const id = useId();
   const { readOnly, issues } = useAssessmentCtx();
   const [draft, setDraft] = useState(value == null || Number.isNaN(value) ? "" : String(value));
@@ -37,12 +47,12 @@ export function NumField({ path, label, hint, className, value, onValue, step }:
   const invalid = Boolean(local) || issues.has(path);
   return (
     <div className={className}>
-      <label htmlFor={id} className="field-label">{label}</label>
+      <label htmlFor={id} className={labelClass(compact)}>{label}</label>
       <input
         id={id}
         inputMode="decimal"
         step={step}
-        className="field-input"
+        className={inputClass(compact)}
         value={draft}
         readOnly={readOnly}
         aria-invalid={invalid || undefined}
@@ -67,25 +77,25 @@ export function NumField({ path, label, hint, className, value, onValue, step }:
   );
 }
 
-export function TextField({ path, label, className, value, onValue }: Base & { value: string; onValue: (v: string) => void }) {
+export function TextField({ path, label, className, compact, value, onValue }: Base & { value: string; onValue: (v: string) => void }) {
   const id = useId();
   const { readOnly, issues } = useAssessmentCtx();
   return (
     <div className={className}>
-      <label htmlFor={id} className="field-label">{label}</label>
-      <input id={id} className="field-input" value={value} readOnly={readOnly} aria-invalid={issues.has(path) || undefined} aria-describedby={`${id}-err`} onChange={(e) => onValue(e.target.value)} />
+      <label htmlFor={id} className={labelClass(compact)}>{label}</label>
+      <input id={id} className={inputClass(compact)} value={value} readOnly={readOnly} data-path={path} aria-invalid={issues.has(path) || undefined} aria-describedby={`${id}-err`} onChange={(e) => onValue(e.target.value)} />
       <Messages id={id} path={path} />
     </div>
   );
 }
 
-export function ChoiceField<T extends string>({ path, label, className, value, options, onValue }: Base & { value: T | ""; options: readonly { value: T; label: string }[]; onValue: (v: T) => void }) {
+export function ChoiceField<T extends string>({ path, label, className, compact, value, options, onValue }: Base & { value: T | ""; options: readonly { value: T; label: string }[]; onValue: (v: T) => void }) {
   const id = useId();
   const { readOnly, issues } = useAssessmentCtx();
   return (
     <div className={className}>
-      <label htmlFor={id} className="field-label">{label}</label>
-      <select id={id} className="field-input" value={value} disabled={readOnly} aria-invalid={issues.has(path) || undefined} aria-describedby={`${id}-err`} onChange={(e) => onValue(e.target.value as T)}>
+      <label htmlFor={id} className={labelClass(compact)}>{label}</label>
+      <select id={id} className={inputClass(compact)} value={value} disabled={readOnly} data-path={path} aria-invalid={issues.has(path) || undefined} aria-describedby={`${id}-err`} onChange={(e) => onValue(e.target.value as T)}>
         {value === "" ? <option value="">Choose…</option> : null}
         {options.map((o) => (
           <option key={o.value} value={o.value}>{o.label}</option>

@@ -37,6 +37,9 @@ export const achNatural = (x: number) => num(x, 2);
 export const power = (btuh: number, u: Units) => (u === "ip" ? `${num(roundTo(btuh, 100))} Btu/h` : `${num(toSI.power(btuh) / 1000, 1)} kW`);
 /** Heat flow without rounding to 100 (for the pieces of a load in "how" lists). */
 export const powerExact = (btuh: number, u: Units) => (u === "ip" ? `${num(btuh)} Btu/h` : `${num(toSI.power(btuh))} W`);
+/** UA as a bare number in the chosen units (Btu/h·°F or W/K), for table cells whose header names the unit. */
+export const uaValue = (x: number, u: Units) => (u === "ip" ? x : x * UA_TO_W_PER_K);
+export const uaUnit = (u: Units) => (u === "ip" ? "Btu/h·°F" : "W/K");
 export const ua = (x: number, u: Units) => (u === "ip" ? `${num(x, 1)} Btu/h·°F` : `${num(x * UA_TO_W_PER_K, 1)} W/K`);
 export const flow = (cfm: number, u: Units, digits = 0) => (u === "ip" ? `${num(cfm, digits)} cfm` : `${num(toSI.airflow(cfm), digits)} L/s`);
 export const cfm50 = (cfm: number, u: Units) => (u === "ip" ? `${num(cfm)} CFM50` : `${num(toSI.airflow(cfm))} L/s at 50 Pa`);
