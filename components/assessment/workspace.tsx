@@ -1,10 +1,11 @@
 "use client";
 
-import { useDeferredValue, useEffect, useMemo, useState } from "react";
+import { useDeferredValue, useEffect, useMemo } from "react";
 import { analyzeHouse, CalcInputError, type AssemblyDef, type HouseAnalysis } from "@/calc";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import { docPath, toHouseInput } from "@/lib/assessment/to-house-input";
 import { useAssessment, type Issue } from "@/lib/hooks/use-assessment";
+import { useUnitPreference } from "@/lib/hooks/use-preferences";
 import { AssessmentProvider, groupIssues } from "./context";
 import { HouseSection } from "./house-section";
 import { LeakageSection } from "./leakage-section";
@@ -12,6 +13,7 @@ import { ResultsPanel } from "./results";
 import { SaveStatusBadge } from "./save-status";
 import { StacksSection } from "./stacks-section";
 import { SurfacesSection } from "./surfaces-section";
+import { noteEdit, noteResults } from "./timings";
 import { UpgradesSection } from "./upgrades-section";
 
 type Live = { analysis: HouseAnalysis | null; issues: Issue[]; warnings: Issue[] };
@@ -28,34 +30,16 @@ function analyzeLive(doc: AssessmentDoc): Live {
   }
 }
 
-declare global {
-  interface Window {
-    __warmsteadTimings?: number[];
-  }
-}
-
-export function AssessmentWorkspace({ jobId }: { jobId: string }) {
+export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: string; initialUnits?: "ip" | "si" }) {
   const a = useAssessment(jobId);
-  const [units, setUnits] = useState<"ip" | "si">("ip");
-  useEffect(() => {
-    const saved = localStorage.getItem("warmstead:units");
-    // A browser-only preference, read once after hydration so server and client markup agree.
-    // eslint-disable-next-line react-hooks/set-state-in-effect
-    if (saved === "si" || saved === "ip") setUnits(saved);
-  }, []);
+  const { units, setUnits, error: unitsError } = useUnitPreference(initialUnits);
   const deferred = useDeferredValue(a.doc);
   const live = useMemo(() => (deferred ? analyzeLive(deferred) : null), [deferred]);
 
-  // Keystroke → results on screen, for the browser test and the bench to read.
+  // Keystroke → results painted (components/assessment/timings.ts), for the browser test and the bench.
   useEffect(() => {
-    if (!live) return;
-    const started = performance.getEntriesByName("warmstead:edit", "mark").at(-1);
-    if (!started) return;
-    requestAnimationFrame(() => {
-      (window.__warmsteadTimings ??= []).push(performance.now() - started.startTime);
-      performance.clearMarks("warmstead:edit");
-    });
-  }, [live]);
+    if (live && deferred) noteResults(deferred);
+  }, [live, deferred]);
 
   if (a.loadError) return <p role="status" className="rounded-md bg-danger-bg px-3 py-2 text-danger">{a.loadError.message}</p>;
   if (!a.doc || !a.loaded || !live) return <p className="text-ink-muted">Loading the assessment…</p>;
@@ -63,15 +47,13 @@ export function AssessmentWorkspace({ jobId }: { jobId: string }) {
   const issues = groupIssues([...a.blocking, ...live.issues]);
   const ctx = {
     doc: a.doc,
-    update: (change: (d: AssessmentDoc) => AssessmentDoc) => {
-      performance.mark("warmstead:edit");
-      a.update(change);
-    },
+    update: (change: (d: AssessmentDoc) => AssessmentDoc) => noteEdit(a.update(change)),
     readOnly: !a.loaded.canEdit,
     pricesVisible: a.loaded.pricesVisible,
     units,
     issues,
     warnings: groupIssues(live.warnings),
+    analysis: live.analysis,
   };
   return (
     <AssessmentProvider value={ctx}>
@@ -81,10 +63,11 @@ export function AssessmentWorkspace({ jobId }: { jobId: string }) {
           <legend className="sr-only">Units</legend>
           {(["ip", "si"] as const).map((u) => (
             <label key={u} className="flex min-h-11 items-center gap-1">
-              <input type="radio" name="units" checked={units === u} onChange={() => { setUnits(u); localStorage.setItem("warmstead:units", u); }} />
+              <input type="radio" name="units" checked={units === u} onChange={() => void setUnits(u)} />
               {u === "ip" ? "US units (IP)" : "Metric (SI)"}
             </label>
           ))}
+          {unitsError ? <span role="alert" className="text-danger">{unitsError}</span> : null}
         </fieldset>
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_28rem]">

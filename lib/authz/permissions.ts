@@ -28,10 +28,12 @@ export const permissions = [
   "clients:invite",
   "portal:read",
   "activity:read",
+  "account:preferences",
 ] as const;
 export type Permission = (typeof permissions)[number];
 
-const staffCommon: Permission[] = ["jobs:list", "jobs:read", "assessment:read", "crewlog:read", "photos:read", "photos:upload", "photos:delete"];
+// Every signed-in user sets their own display preferences (units); nobody else's.
+const staffCommon: Permission[] = ["account:preferences", "jobs:list", "jobs:read", "assessment:read", "crewlog:read", "photos:read", "photos:upload", "photos:delete"];
 
 const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
   owner: new Set<Permission>([
@@ -67,7 +69,7 @@ const rolePermissions: Record<RoleName, ReadonlySet<Permission>> = {
   ]),
   installer: new Set<Permission>([...staffCommon, "crewlog:write", "leakage:write"]),
   // photos:read reaches only the photos named by the homeowner's own issued documents (lib/data/photos.ts, photoScope).
-  homeowner: new Set<Permission>(["portal:read", "documents:read", "proposals:accept", "photos:read"]),
+  homeowner: new Set<Permission>(["account:preferences", "portal:read", "documents:read", "proposals:accept", "photos:read"]),
 };
 
 export function can(role: RoleName, permission: Permission): boolean {

@@ -128,6 +128,7 @@ export function useAssessment(jobId: string) {
       setBlocking(docIssues(next));
       clearTimeout(timer.current);
       timer.current = setTimeout(() => void send(), SAVE_DELAY_MS);
+      return next;
     },
     [jobId, send],
   );

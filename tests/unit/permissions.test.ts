@@ -2,10 +2,10 @@ import { describe, expect, it } from "vitest";
 import { can, permissions, roleNames } from "@/lib/authz/permissions";
 
 describe("role → permission map", () => {
-  it("gives homeowners only portal reading, their documents, the photos in them and accepting a proposal", () => {
+  it("gives homeowners only portal reading, their documents, the photos in them, accepting a proposal and their own display units", () => {
     const granted = permissions.filter((p) => can("homeowner", p));
     // photos:read is limited by the data layer to photos named by their own issued documents
-    expect(granted.sort()).toEqual(["documents:read", "photos:read", "portal:read", "proposals:accept"]);
+    expect(granted.sort()).toEqual(["account:preferences", "documents:read", "photos:read", "portal:read", "proposals:accept"]);
     expect(can("homeowner", "photos:upload")).toBe(false);
     expect(can("homeowner", "photos:delete")).toBe(false);
   });
@@ -22,6 +22,10 @@ describe("role → permission map", () => {
       expect(can(role, "users:manage")).toBe(role === "owner");
       expect(can(role, "pricebook:manage")).toBe(role === "owner");
     }
+  });
+
+  it("lets every role set its own display units", () => {
+    for (const role of roleNames) expect(can(role, "account:preferences")).toBe(true);
   });
 
   it("refuses an unknown role", () => {

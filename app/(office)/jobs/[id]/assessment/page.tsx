@@ -17,7 +17,7 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
       <p className="text-sm font-semibold text-ember-700">Job #{job.number}</p>
       <h1 className="text-3xl font-bold text-spruce-900">{job.house.street}</h1>
       <JobTabs jobId={job.id} active="assessment" />
-      <AssessmentWorkspace jobId={job.id} />
+      <AssessmentWorkspace jobId={job.id} initialUnits={user.unitSystem} />
     </>
   );
 }
