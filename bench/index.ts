@@ -1,5 +1,6 @@
 // `npm run bench`: prints speed and memory figures against their targets. It never fails a build:
 // figures depend on the machine and on what else runs on it, so read them, don't gate on them.
+import { runBrowserBench } from "./browser";
 import { runCalcBench } from "./calc";
 import { runJobsBench } from "./jobs";
 import { runPdfBench } from "./pdf";
@@ -11,6 +12,7 @@ const benches: [string, () => Promise<unknown>][] = [
   ["jobs", runJobsBench],
   ["photos", runPhotosBench],
   ["pdf", runPdfBench],
+  ["browser", runBrowserBench],
 ];
 
 console.log(`# Warmstead benchmarks — Node ${process.version}, ${(await import("node:os")).cpus().length} cores`);

@@ -1,0 +1,87 @@
+// Measurements taken in Chromium on the assessment page, shared by the browser test
+// (tests/browser/assessment-large.test.ts) and `npm run bench` (bench/browser.ts).
+import type { Locator, Page } from "playwright-core";
+
+export type Summary = { n: number; median: number; p95: number; max: number };
+
+export function summarise(values: number[]): Summary {
+  const s = [...values].sort((a, b) => a - b);
+  const at = (p: number) => s[Math.min(s.length - 1, Math.ceil(p * s.length) - 1)] ?? Number.NaN;
+  return { n: s.length, median: at(0.5), p95: at(0.95), max: s.at(-1) ?? Number.NaN };
+}
+
+/**
+ * Types into a number field `n` times (a digit, then Backspace, and so on), waiting after each
+ * key until the page has painted results that reflect it (components/assessment/timings.ts),
+ * and returns the page's own keystroke → painted-results figures in ms.
+ */
+export async function measureKeystrokes(page: Page, field: Locator, n: number, pauseMs = 40): Promise<number[]> {
+  await field.focus();
+  await page.keyboard.press("End");
+  const start = await page.evaluate(() => (window.__warmsteadTimings ??= []).length);
+  for (let i = 0; i < n; i++) {
+    await page.keyboard.press(i % 2 === 0 ? "7" : "Backspace");
+    await page.waitForFunction((want) => (window.__warmsteadTimings?.length ?? 0) >= want, start + i + 1, { timeout: 10_000 });
+    await page.waitForTimeout(pauseMs);
+  }
+  return page.evaluate((from) => window.__warmsteadTimings!.slice(from), start);
+}
+
+/** Run before navigation: notes (performance.now) when the form and the results panel first appear. */
+export async function watchPanels(page: Page) {
+  await page.addInitScript(() => {
+    const w = window as unknown as { __warmsteadSeen?: Record<string, number> };
+    const seen: Record<string, number> = (w.__warmsteadSeen = {});
+    const check = () => {
+      for (const id of ["surface-list", "results-panel"]) if (!(id in seen) && document.querySelector(`[data-testid="${id}"]`)) seen[id] = performance.now();
+      if (!("chart" in seen) && document.querySelector(".recharts-wrapper")) seen.chart = performance.now();
+    };
+    new MutationObserver(check).observe(document, { childList: true, subtree: true });
+  });
+}
+
+type ScriptEntry = { url: string; start: number; bytes: number; transfer: number };
+
+/**
+ * The JavaScript the assessment page loads before its chart code, and whether the chart code
+ * (recharts, behind next/dynamic in components/assessment/results/heat-loss.tsx) waited for the
+ * results panel: asked for only after the assessment document arrived (the panel renders from it)
+ * and not named by the server's HTML. Call watchPanels before `page.goto`, then this.
+ */
+export async function firstLoad(page: Page) {
+  await page.locator(".recharts-wrapper").first().waitFor({ timeout: 30_000 });
+  await page.waitForLoadState("networkidle");
+  const { seen, scripts, docArrived } = await page.evaluate(() => ({
+    seen: (window as unknown as { __warmsteadSeen: Record<string, number> }).__warmsteadSeen,
+    scripts: performance.getEntriesByType("resource").filter((e) => (e as PerformanceResourceTiming).initiatorType === "script" || e.name.endsWith(".js"))
+      .map((e) => ({ url: e.name, start: e.startTime, bytes: (e as PerformanceResourceTiming).decodedBodySize, transfer: (e as PerformanceResourceTiming).transferSize })),
+    // When the assessment document (which the form and the panel both wait for) had arrived.
+    docArrived: Math.min(...performance.getEntriesByType("resource").filter((e) => /\/api\/jobs\/[^/]+\/assessment$/.test(new URL(e.name).pathname)).map((e) => (e as PerformanceResourceTiming).responseEnd)),
+  }));
+  // The server's own HTML for the page (the live DOM also holds the script tags added by dynamic imports).
+  const html = await (await page.request.get(page.url())).text();
+  const chart: ScriptEntry[] = [];
+  for (const sc of scripts as ScriptEntry[]) {
+    // recharts' own class names are string literals in its code, minified or not.
+    if ((await (await page.request.get(sc.url)).text()).includes("recharts-wrapper")) chart.push(sc);
+  }
+  const panelAt = seen["results-panel"] ?? Number.NaN;
+  const chartStart = Math.min(...chart.map((c) => c.start));
+  const before = (scripts as ScriptEntry[]).filter((sc) => sc.start < chartStart && !chart.includes(sc));
+  const sum = (l: ScriptEntry[], k: "bytes" | "transfer") => l.reduce((a, x) => a + x[k], 0);
+  return {
+    formAtMs: seen["surface-list"] ?? Number.NaN,
+    panelAtMs: panelAt,
+    chartAtMs: seen.chart ?? Number.NaN,
+    docAtMs: docArrived,
+    scriptsBeforeChart: before.length,
+    bytesBeforeChart: sum(before, "bytes"),
+    transferBeforeChart: sum(before, "transfer"),
+    chartChunks: chart.map((c) => c.url),
+    chartBytes: sum(chart, "bytes"),
+    /** Every chart chunk was asked for only once the assessment had arrived and the panel was rendering. */
+    chartAfterData: chart.length > 0 && chart.every((c) => c.start >= docArrived),
+    /** No chart chunk is named by the server's HTML (it is a dynamic import). */
+    chartInInitialHtml: chart.some((c) => html.includes(new URL(c.url).pathname)),
+  };
+}
