@@ -111,6 +111,21 @@ describe("assessment in the browser", () => {
     await wall.getByLabel("Gross area (ft²)").fill("400");
     await saved(page);
     await expectResultsMatchServer(page, jobId);
+
+    // Overriding an upgrade's total needs a reason: without one nothing saves and the reason is asked for.
+    const dense = page.getByTestId("upgrade-0");
+    await dense.getByLabel("Override this upgrade's installed cost for this job").check();
+    await page.getByTestId("upgrade-0-reason-needed").waitFor();
+    await page.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "invalid");
+    await dense.getByLabel("Installed cost for this job ($)").fill("5000");
+    await dense.getByLabel("Reason for the override (shown on the proposal)").fill("Two walls need interior access");
+    await page.getByTestId("upgrade-0-cost").getByText("$5,000.00").waitFor();
+    await saved(page);
+    await expectResultsMatchServer(page, jobId);
+    const { doc } = (await (await page.request.get(`/api/jobs/${jobId}/assessment`)).json()) as { doc: AssessmentDoc };
+    expect(doc.upgrades[0]!.costUSD).toBe(5000);
+    expect(doc.upgrades[0]!.pricing?.totalOverride?.reason).toBe("Two walls need interior access");
+    await snap(page, "assessment-cost-override-phone");
     await context.close();
   });
 
