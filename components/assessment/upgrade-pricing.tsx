@@ -100,10 +100,10 @@ function LineRow({ i, line }: { i: number; line: PricedLine }) {
           </button>
         ) : null}
       </div>
-      <div className="mt-1 grid grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto] items-start gap-2">
+      <div className="mt-1 grid grid-cols-2 items-start gap-2 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto]">
       <NumField path={`${base}.quantity`} label={`Quantity (${line.unit})`} hint={quantityHint[line.key]} value={line.quantity} onValue={(n) => update((d) => setLine(d, i, line.key, "quantity", n === null ? undefined : n))} />
       <NumField path={`${base}.unitPriceCents`} label="Unit price ($)" value={line.unitPriceCents / 100} onValue={(n) => update((d) => setLine(d, i, line.key, "unitPriceCents", n === null ? undefined : Math.round(n * 100)))} />
-      <p className="min-w-[6rem] pt-8 text-right tabular-nums" data-testid={`upgrade-${i}-line-${line.key}-total`}>{formatDollars(line.totalCents)}</p>
+      <p className="col-span-2 text-right tabular-nums sm:col-span-1 sm:min-w-[6rem] sm:pt-8"><span className="text-sm text-ink-muted sm:sr-only">Line total </span><span data-testid={`upgrade-${i}-line-${line.key}-total`}>{formatDollars(line.totalCents)}</span></p>
       </div>
     </li>
   );
