@@ -101,7 +101,8 @@ export function priceJob(
       // Labour follows the bags actually priced, so a changed bag count moves the hours too.
       lines.push(make("labour", PRICE_CODES.labour, roundHalf(bagLine.quantity / DEFAULT_BAGS_PER_CREW_HOUR), "Insulation crew labour", i, o.labour, "hour"));
     } else if (u.type === "attic-insulation") {
-      const added = (a?.details.added as { surfaceId: string }[] | undefined) ?? [];
+      // Ceilings already at the target get nothing blown in, so they are not priced.
+      const added = ((a?.details.added as { surfaceId: string; addedRIP: number }[] | undefined) ?? []).filter((x) => x.addedRIP > 0);
       const area = Math.round(added.reduce((s, x) => s + (areaOf.get(x.surfaceId) ?? 0), 0));
       lines.push(make("area", PRICE_CODES.area, area, `${name} (attic floor)`, i, o.area, "ft2"));
     } else if (u.type === "air-sealing") {

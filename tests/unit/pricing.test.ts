@@ -53,6 +53,12 @@ describe("priceJob", () => {
     expect(attic!.costCents).toBe(Math.round(ceilings) * 185);
   });
 
+  it("does not price ceilings already at the target", () => {
+    const done = priceJob(ups.map((u) => (u.type === "attic-insulation" ? { ...u, targetRIP: 1 } : u)), analyzeHouse({ ...demoHouseInput, upgrades: demoHouseInput.upgrades.map((u) => (u.type === "attic-insulation" ? { ...u, targetRIP: 1 } : u)) }), book);
+    expect(done.upgrades[1]!.lines).toHaveLength(0);
+    expect(done.upgrades[1]!.costCents).toBe(0);
+  });
+
   it("applies a job's quantity and unit price changes, and a total override with its reason", () => {
     const changed = priceJob(
       ups.map((u, i) => (i === 2 ? { ...u, pricing: { lines: { bags: { quantity: 100 }, holes: { unitPriceCents: 1000 } } } } : i === 1 ? { ...u, pricing: { totalOverride: { cents: 200_000, reason: "Attic hatch rebuilt in the same visit" } } } : u)),
