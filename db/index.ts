@@ -1,6 +1,6 @@
 // The one database client. Nothing connects at import time: `next build`
 // imports route modules in a checkout that has no data/ folder yet.
-import { createClient, type Client } from "@libsql/client";
+import { createClient, type Client, type InStatement, type Transaction } from "@libsql/client";
 import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
 import * as schema from "./schema";
 
@@ -35,7 +35,7 @@ export function sqliteFilePath(url: string): string | null {
  */
 export function createDb(url: string = databaseUrl(), authToken?: string): Db {
   const raw = createClient({ url, authToken, timeout: 5000 });
-  const client = sqliteFilePath(url) === null ? raw : gateUntilReady(raw, () => prepareFile(raw, url));
+  const client = sqliteFilePath(url) === null ? raw : oneWriterAtATime(gateUntilReady(raw, () => prepareFile(raw, url)));
   return drizzle({ client, schema }) as Db;
 }
 
@@ -84,4 +84,122 @@ function gateUntilReady(client: Client, setup: () => Promise<void>): Client {
       };
     },
   });
+}
+
+/**
+ * Lets one write (a transaction, a batch or a writing statement) run at a time in this process;
+ * reads never wait.
+ *
+ * The local libSQL client runs SQLite synchronously on the event loop, with a connection per open
+ * transaction. If a second write began while a transaction was open, its BEGIN (or INSERT) would
+ * wait for SQLite's lock inside the synchronous call, for the whole busy timeout, while the
+ * transaction holding the lock could not run its next statement: a frozen server and then
+ * SQLITE_BUSY. Queuing writes here instead lets the open transaction finish first.
+ */
+export function oneWriterAtATime(client: Client, opts: { waitMs?: number } = {}): Client {
+  const waitMs = opts.waitMs ?? 15_000;
+  let tail: Promise<void> = Promise.resolve();
+  /** Resolves with a release function once every earlier write has released. */
+  const acquire = async (): Promise<() => void> => {
+    let release!: () => void;
+    const mine = new Promise<void>((r) => (release = r));
+    const before = tail;
+    tail = before.then(() => mine);
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const timedOut = new Promise<never>((_, reject) => {
+      timer = setTimeout(() => reject(new Error(`A database write waited more than ${waitMs} ms for the one before it.`)), waitMs);
+    });
+    try {
+      await Promise.race([before, timedOut]);
+    } catch (error) {
+      // Give up our turn without holding up the writes queued behind it.
+      before.then(release, release);
+      throw error;
+    } finally {
+      clearTimeout(timer);
+    }
+    let released = false;
+    return () => {
+      if (released) return;
+      released = true;
+      release();
+    };
+  };
+  const whileHeld = async <T>(run: () => Promise<T>): Promise<T> => {
+    const release = await acquire();
+    try {
+      return await run();
+    } finally {
+      release();
+    }
+  };
+
+  return new Proxy(client, {
+    get(target, property) {
+      const value: unknown = Reflect.get(target, property, target);
+      if (typeof value !== "function") return value;
+      const fn = value as (...args: unknown[]) => Promise<unknown>;
+      switch (property) {
+        case "execute":
+          return (stmt: InStatement, ...rest: unknown[]) => (isRead(stmt) ? fn.call(target, stmt, ...rest) : whileHeld(() => fn.call(target, stmt, ...rest)));
+        case "batch":
+        case "migrate":
+        case "executeMultiple":
+          return (...args: unknown[]) => whileHeld(() => fn.apply(target, args));
+        case "transaction":
+          return async (...args: unknown[]) => {
+            // A read transaction takes no write lock, so it need not wait its turn.
+            if (args[0] === "read") return fn.apply(target, args);
+            const release = await acquire();
+            let tx: Transaction;
+            try {
+              tx = (await fn.apply(target, args)) as Transaction;
+            } catch (error) {
+              release();
+              throw error;
+            }
+            return releasingOnEnd(tx, release);
+          };
+        default:
+          return fn.bind(target);
+      }
+    },
+  });
+}
+
+/** The transaction, releasing the writer's turn once it commits, rolls back or closes. */
+function releasingOnEnd(tx: Transaction, release: () => void): Transaction {
+  return new Proxy(tx, {
+    get(target, property) {
+      const value: unknown = Reflect.get(target, property, target);
+      if (typeof value !== "function") return value;
+      if (property === "commit" || property === "rollback") {
+        return async (...args: unknown[]) => {
+          try {
+            return await (value as (...a: unknown[]) => Promise<unknown>).apply(target, args);
+          } finally {
+            release();
+          }
+        };
+      }
+      if (property === "close") {
+        return (...args: unknown[]) => {
+          try {
+            return (value as (...a: unknown[]) => unknown).apply(target, args);
+          } finally {
+            release();
+          }
+        };
+      }
+      return (value as (...a: unknown[]) => unknown).bind(target);
+    },
+  });
+}
+
+/** A statement that only reads: SELECT, EXPLAIN or WITH … SELECT (no write keyword), or a PRAGMA that sets nothing. */
+function isRead(stmt: InStatement): boolean {
+  const text = (typeof stmt === "string" ? stmt : stmt.sql).trimStart();
+  if (/^(select|explain)\b/i.test(text)) return true;
+  if (/^with\b/i.test(text)) return !/\b(insert|update|delete|replace)\b/i.test(text);
+  return /^pragma\b/i.test(text) && !text.includes("=");
 }
