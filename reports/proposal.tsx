@@ -79,6 +79,7 @@ function ProposalBody({ snapshot: sn }: { snapshot: ReportSnapshot }) {
         ]}
         rows={p.lines.map((l) => [l.description, qty(l.quantity), l.unit, t.dollars(l.unitPriceCents), t.dollars(l.totalCents)])}
       />
+      {p.upgradesCents !== undefined ? <P style={[s.small, { marginTop: 4 }]}>{`The upgrade lines add up to ${t.dollars(p.upgradesCents)} before tax: the same cost the savings report uses for payback and SIR.`}</P> : null}
       <View style={{ flexDirection: "row", marginTop: 8 }} wrap={false}>
         <View style={{ flex: 1, paddingRight: 24 }}>
           <View style={[s.card, { backgroundColor: colors.spruce50 }]}>

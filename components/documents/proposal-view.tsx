@@ -32,6 +32,7 @@ export function ProposalView({ snapshot }: { snapshot: ReportSnapshot }) {
           </tfoot>
         </table>
       </div>
+      {p.upgradesCents !== undefined ? <p className="text-sm" data-testid="proposal-upgrades-subtotal">The upgrade lines add up to {formatDollars(p.upgradesCents)} before tax: the same cost the savings report uses for payback and SIR.</p> : null}
       <p className="text-sm text-ink-muted">Valid until {day.format(p.validUntil)}. {p.terms}</p>
       <p className="text-sm text-ink-muted">{[snapshot.company.licenseLine, snapshot.company.insuranceLine].filter(Boolean).join(" · ")}</p>
     </section>
