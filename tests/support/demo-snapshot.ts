@@ -78,7 +78,7 @@ export function demoSnapshot(kind: DocumentKind, opts: DemoOptions = {}): Report
     const taxCents = Math.round((subtotalCents * taxRatePpm) / 1_000_000);
     const totalCents = subtotalCents + taxCents;
     proposal = {
-      lines, subtotalCents, taxRatePpm, taxCents, totalCents,
+      lines, subtotalCents, upgradesCents: lines.filter((l) => l.upgradeIndex !== undefined).reduce((a, l) => a + l.totalCents, 0), taxRatePpm, taxCents, totalCents,
       depositCents: Math.round((totalCents * 0.25) / 100) * 100,
       validUntil: ISSUED_AT + 30 * DAY,
       terms: [
