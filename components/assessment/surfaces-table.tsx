@@ -1,9 +1,10 @@
 "use client";
 
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type RowSelectionState } from "@tanstack/react-table";
-import { Fragment, useMemo, useState } from "react";
-import type { AssessmentSurface } from "@/lib/assessment/doc";
-import { useAssessmentCtx } from "./context";
+import { memo, useMemo, useState } from "react";
+import type { Row } from "@tanstack/react-table";
+import type { AssessmentDoc, AssessmentSurface } from "@/lib/assessment/doc";
+import { AssessmentProvider, useAssessmentCtx, type AssessmentCtx } from "./context";
 import { U_UNIT } from "./layer-stack/format";
 import * as f from "./results/format";
 import type { SurfaceFigures, surfaceTotals } from "./surface-edits";
@@ -33,7 +34,8 @@ export function SurfacesTable({
   totals: ReturnType<typeof surfaceTotals>;
   actions: RowActions;
 }) {
-  const { doc, readOnly, units } = useAssessmentCtx();
+  const ctx = useAssessmentCtx();
+  const { doc, readOnly, units } = ctx;
   const [open, setOpen] = useState<Set<string>>(new Set());
   const toggleOpen = (id: string) => setOpen((o) => { const n = new Set(o); if (n.has(id)) n.delete(id); else n.add(id); return n; });
 
@@ -53,6 +55,7 @@ export function SurfacesTable({
   });
   const colCount = table.getVisibleLeafColumns().length;
   const lead = readOnly ? 0 : 1;
+  const issueSig = rowIssueSignatures(ctx.issues, ctx.warnings);
 
   return (
     <div className="-mx-2 overflow-x-auto px-2 pb-1" data-testid="surface-table">
@@ -71,23 +74,22 @@ export function SurfacesTable({
         </thead>
         <tbody>
           {table.getRowModel().rows.map((row) => (
-            <Fragment key={row.id}>
-              <tr className={`border-b border-line/60 align-top ${row.getIsSelected() ? "bg-spruce-50" : ""}`} data-testid={`surface-${row.index}`} data-surface-id={row.id}>
-                {row.getVisibleCells().map((c) => (
-                  <td key={c.id} className={`px-2 py-1.5 ${c.column.id === "figures" ? "pt-2.5 text-right" : ""} ${c.column.id === "select" ? "pt-3.5" : ""}`}>
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-              {open.has(row.id) ? (
-                <tr id={`openings-${row.id}`} className="border-b border-line/60 bg-paper" data-testid={`surface-${row.index}-openings`}>
-                  {lead ? <td /> : null}
-                  <td colSpan={colCount - lead} className="px-2 py-3">
-                    <div className="max-w-3xl"><OpeningsEditor index={row.index} compact /></div>
-                  </td>
-                </tr>
-              ) : null}
-            </Fragment>
+            <SurfaceRow
+              key={row.id}
+              row={row}
+              ctx={ctx}
+              surface={row.original}
+              index={row.index}
+              selected={row.getIsSelected()}
+              expanded={open.has(row.id)}
+              figures={figures?.get(row.id)}
+              issueSig={issueSig.get(row.index) ?? ""}
+              assemblies={doc.assemblies}
+              upgrades={doc.upgrades}
+              units={units}
+              readOnly={readOnly}
+              colCount={colCount}
+            />
           ))}
         </tbody>
         <tfoot>
@@ -164,3 +166,70 @@ function surfaceColumns(readOnly: boolean): ColumnDef<AssessmentSurface>[] {
   ];
 }
 
+
+/** Per row index, a string of the reasons and warnings whose path is inside that surface. */
+function rowIssueSignatures(issues: Map<string, string[]>, warnings: Map<string, string[]>): Map<number, string> {
+  const out = new Map<number, string>();
+  for (const [tag, m] of [["e", issues], ["w", warnings]] as const) {
+    for (const [path, msgs] of m) {
+      const hit = /^surfaces\.(\d+)\./.exec(path);
+      if (!hit) continue;
+      const i = Number(hit[1]);
+      out.set(i, `${out.get(i) ?? ""}|${tag}:${path}=${msgs.join("¦")}`);
+    }
+  }
+  return out;
+}
+
+type RowProps = {
+  row: Row<AssessmentSurface>;
+  ctx: AssessmentCtx;
+  surface: AssessmentSurface;
+  index: number;
+  selected: boolean;
+  expanded: boolean;
+  figures: SurfaceFigures | undefined;
+  issueSig: string;
+  assemblies: AssessmentDoc["assemblies"];
+  upgrades: AssessmentDoc["upgrades"];
+  units: "ip" | "si";
+  readOnly: boolean;
+  colCount: number;
+};
+
+const sameFigures = (a: SurfaceFigures | undefined, b: SurfaceFigures | undefined) =>
+  a === b || (!!a && !!b && a.uBefore === b.uBefore && a.uAfter === b.uAfter && a.uaBefore === b.uaBefore && a.uaAfter === b.uaAfter);
+
+/**
+ * One surface's row. A keystroke in one row re-renders that row only: the row gives its cells
+ * their own provider, whose value changes only when something the row shows has changed (its
+ * surface, its reasons, its figures, the stacks and upgrades it lists, selection, units).
+ */
+const SurfaceRow = memo(
+  function SurfaceRow({ row, ctx, surface, index, selected, expanded, colCount, readOnly }: RowProps) {
+    const lead = readOnly ? 0 : 1;
+    return (
+      <AssessmentProvider value={ctx}>
+        <tr className={`border-b border-line/60 align-top ${selected ? "bg-spruce-50" : ""}`} data-testid={`surface-${index}`} data-surface-id={surface.id}>
+          {row.getVisibleCells().map((c) => (
+            <td key={c.id} className={`px-2 py-1.5 ${c.column.id === "figures" ? "pt-2.5 text-right" : ""} ${c.column.id === "select" ? "pt-3.5" : ""}`}>
+              {flexRender(c.column.columnDef.cell, c.getContext())}
+            </td>
+          ))}
+        </tr>
+        {expanded ? (
+          <tr id={`openings-${surface.id}`} className="border-b border-line/60 bg-paper" data-testid={`surface-${index}-openings`}>
+            {lead ? <td /> : null}
+            <td colSpan={colCount - lead} className="px-2 py-3">
+              <div className="max-w-3xl"><OpeningsEditor index={index} compact /></div>
+            </td>
+          </tr>
+        ) : null}
+      </AssessmentProvider>
+    );
+  },
+  (a, b) =>
+    a.surface === b.surface && a.index === b.index && a.selected === b.selected && a.expanded === b.expanded && a.issueSig === b.issueSig &&
+    sameFigures(a.figures, b.figures) && a.assemblies === b.assemblies && a.upgrades === b.upgrades && a.units === b.units && a.readOnly === b.readOnly &&
+    a.colCount === b.colCount && a.ctx.update === b.ctx.update,
+);

@@ -1,6 +1,6 @@
 "use client";
 
-import { useDeferredValue, useEffect, useMemo } from "react";
+import { useCallback, useDeferredValue, useEffect, useMemo } from "react";
 import { analyzeHouse, CalcInputError, type AssemblyDef, type HouseAnalysis } from "@/calc";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import { docPath, toHouseInput } from "@/lib/assessment/to-house-input";
@@ -36,6 +36,10 @@ export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: str
   const deferred = useDeferredValue(a.doc);
   const live = useMemo(() => (deferred ? analyzeLive(deferred) : null), [deferred]);
 
+  const edit = a.update;
+  // One function for the whole life of the page, so memoised rows can tell nothing else changed.
+  const update = useCallback((change: (d: AssessmentDoc) => AssessmentDoc) => noteEdit(edit(change)), [edit]);
+
   // Keystroke → results painted (components/assessment/timings.ts), for the browser test and the bench.
   useEffect(() => {
     if (live && deferred) noteResults(deferred);
@@ -47,7 +51,7 @@ export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: str
   const issues = groupIssues([...a.blocking, ...live.issues]);
   const ctx = {
     doc: a.doc,
-    update: (change: (d: AssessmentDoc) => AssessmentDoc) => noteEdit(a.update(change)),
+    update,
     readOnly: !a.loaded.canEdit,
     pricesVisible: a.loaded.pricesVisible,
     units,
