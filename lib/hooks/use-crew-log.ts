@@ -4,6 +4,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import useSWR from "swr";
 import type { CrewLogView } from "@/lib/data/crew-log";
 import { fetcher, FetchError, sendJson } from "./fetcher";
+import { useResendWhenOnline } from "./use-resend-when-online";
 
 export const crewLogKey = (jobId: string) => `/api/jobs/${jobId}/crew-log`;
 
@@ -60,7 +61,6 @@ const isRefusal = (err: unknown) => err instanceof FetchError && err.status >= 4
 export function useCrewQueue(jobId: string, onSent: () => Promise<unknown>) {
   const [queue, setQueue] = useState<QueuedRequest[]>([]);
   const [sending, setSending] = useState(false);
-  const [online, setOnline] = useState(true);
   const [lastError, setLastError] = useState<string | null>(null);
   const flushing = useRef(false);
   const onSentRef = useRef(onSent);
@@ -111,27 +111,12 @@ export function useCrewQueue(jobId: string, onSent: () => Promise<unknown>) {
   }, [jobId, update]);
 
   useEffect(() => {
-    // Loading what a previous visit left on this phone, then sending it.
+    // What a previous visit left on this phone (useResendWhenOnline below sends it).
     // eslint-disable-next-line react-hooks/set-state-in-effect
     setQueue(readQueue(jobId));
-    setOnline(navigator.onLine);
-    void flush();
-    const goOnline = () => {
-      setOnline(true);
-      void flush();
-    };
-    const goOffline = () => setOnline(false);
-    window.addEventListener("online", goOnline);
-    window.addEventListener("offline", goOffline);
-    const timer = window.setInterval(() => {
-      if (readQueue(jobId).some((r) => r.state === "pending")) void flush();
-    }, 20_000);
-    return () => {
-      window.removeEventListener("online", goOnline);
-      window.removeEventListener("offline", goOffline);
-      window.clearInterval(timer);
-    };
-  }, [jobId, flush]);
+  }, [jobId]);
+  const hasPending = useCallback(() => readQueue(jobId).some((r) => r.state === "pending"), [jobId]);
+  const online = useResendWhenOnline(flush, hasPending);
 
   const enqueue = useCallback(
     (kind: QueuedRequest["kind"], url: string, body: Record<string, unknown>) => {

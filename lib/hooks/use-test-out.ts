@@ -1,6 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useRef, useState } from "react";
+import { useResendWhenOnline } from "./use-resend-when-online";
 import { FetchError, sendJson } from "./fetcher";
 
 /** What the installer typed, as typed, and the id the reading will have (made on this phone). */
@@ -66,7 +67,6 @@ export function useTestOut(jobId: string, onRecorded: (answer: TestOutAnswer) =>
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
   const [sending, setSending] = useState(false);
-  const [online, setOnline] = useState(true);
   const [lastError, setLastError] = useState<string | null>(null);
   const flushing = useRef(false);
   const onRecordedRef = useRef(onRecorded);
@@ -115,27 +115,12 @@ export function useTestOut(jobId: string, onRecorded: (answer: TestOutAnswer) =>
   }, [jobId, save]);
 
   useEffect(() => {
-    // What a previous visit left on this phone, then sending it if it was waiting.
+    // What a previous visit left on this phone (useResendWhenOnline below sends it if it was waiting).
     // eslint-disable-next-line react-hooks/set-state-in-effect
     setStored(read(jobId));
-    setOnline(navigator.onLine);
-    void flush();
-    const goOnline = () => {
-      setOnline(true);
-      void flush();
-    };
-    const goOffline = () => setOnline(false);
-    window.addEventListener("online", goOnline);
-    window.addEventListener("offline", goOffline);
-    const timer = window.setInterval(() => {
-      if (read(jobId).queued) void flush();
-    }, 20_000);
-    return () => {
-      window.removeEventListener("online", goOnline);
-      window.removeEventListener("offline", goOffline);
-      window.clearInterval(timer);
-    };
-  }, [jobId, flush]);
+  }, [jobId]);
+  const hasPending = useCallback(() => Boolean(read(jobId).queued), [jobId]);
+  const online = useResendWhenOnline(flush, hasPending);
 
   const change = useCallback(
     (patch: Partial<Omit<TestOutDraft, "clientRequestId">>) => {
