@@ -6,7 +6,7 @@ import { ApiError, notFound } from "@/lib/api/errors";
 import type { AuthUser } from "@/lib/authz/guard";
 import type { JobListQuery, JobPatch, NewJobInput } from "@/lib/validation/job";
 import { logActivity } from "./activity";
-import { jobScope, jobScopePrepared, scopeParams } from "./scope";
+import { jobScope, jobScopePrepared, scopeParams, seesWholeCompany } from "./scope";
 
 export type JobListRow = {
   id: string;
@@ -54,9 +54,18 @@ function matchesSearch(kind: Exclude<SearchKind, "none">) {
   return sql`${jobs}.rowid in (select rowid from job_search where body like ${term} escape '\\')`;
 }
 
-/** The list and count statements for one shape of query (role, filters, sort), with placeholders. */
-function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind) {
-  const conditions = [jobScopePrepared(db, role)];
+/**
+ * How a list query is driven. "index": walk the company's jobs in the sort order (best for no
+ * search or a search matching many jobs). "matches": start from the search's matches and sort
+ * them (best when they are few: a rare name is found without walking thousands of jobs).
+ */
+type Drive = "index" | "matches";
+/** Up to this many matches, "matches" drives the page (measured in bench/jobs.ts: 10,000 jobs). */
+const FEW_MATCHES = 1_000;
+
+/** The list and count statements for one shape of query (role, filters, sort, drive), with placeholders. */
+function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind, drive: Drive) {
+  const conditions = [jobScopePrepared(db, role, { companyIndexed: drive === "index" })];
   if (query.stage) conditions.push(eq(jobs.stage, sql.placeholder("stage")));
   if (search !== "none") conditions.push(matchesSearch(search));
   const where = and(...conditions);
@@ -85,18 +94,24 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
       .prepare(),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
+    // The company-wide total from job_counts (migration 0007), for roles that see the whole company.
+    companyTotal: db
+      .select({ total: sql<number>`coalesce(sum(${sql.raw("n")}), 0)` })
+      .from(sql`job_counts`)
+      .where(query.stage ? sql`company_id = ${sql.placeholder("scopeCompanyId")} and stage = ${sql.placeholder("stage")}` : sql`company_id = ${sql.placeholder("scopeCompanyId")}`)
+      .prepare(),
   };
 }
 
 // Prepared once per database and shape, then reused: building and preparing the statements cost
 // more than running them (bench/jobs.ts).
 const prepared = new WeakMap<Db, Map<string, ReturnType<typeof buildListStatements>>>();
-function listStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind) {
-  const key = `${role}|${query.stage ? "stage" : ""}|${search}|${query.sort}|${query.dir}`;
+function listStatements(db: Db, role: AuthUser["role"], query: JobListQuery, search: SearchKind, drive: Drive) {
+  const key = `${role}|${query.stage ? "stage" : ""}|${search}|${query.sort}|${query.dir}|${drive}`;
   let perDb = prepared.get(db);
   if (!perDb) prepared.set(db, (perDb = new Map()));
   let st = perDb.get(key);
-  if (!st) perDb.set(key, (st = buildListStatements(db, role, query, search)));
+  if (!st) perDb.set(key, (st = buildListStatements(db, role, query, search, drive)));
   return st;
 }
 
@@ -109,11 +124,23 @@ export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ j
 }
 
 async function runList(user: AuthUser, query: JobListQuery, search: Search) {
-  const st = listStatements(getDb(), user.role, query, search.kind);
+  const db = getDb();
   const params = { ...scopeParams(user), stage: query.stage, term: search.term, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
-  const rows = await st.list.execute(params);
-  // A first page that is not full is the whole list: no need to count.
-  const total = query.page === 1 && rows.length < query.pageSize ? rows.length : (await st.count.execute(params))[0]!.total;
+  let rows: Awaited<ReturnType<ReturnType<typeof buildListStatements>["list"]["execute"]>>;
+  let total: number;
+  if (search.kind === "none") {
+    const st = listStatements(db, user.role, query, "none", "index");
+    rows = await st.list.execute(params);
+    if (query.page === 1 && rows.length < query.pageSize) total = rows.length; // a first page that is not full is the whole list
+    else if (seesWholeCompany(user.role)) total = Number((await st.companyTotal.execute(params))[0]?.total ?? 0);
+    else total = (await st.count.execute(params))[0]!.total;
+  } else {
+    // Count the matches first, from the matches; then list from wherever is cheaper.
+    const fromMatches = listStatements(db, user.role, query, search.kind, "matches");
+    total = (await fromMatches.count.execute(params))[0]!.total;
+    if (total === 0) rows = [];
+    else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.execute(params);
+  }
   return {
     total,
     jobs: rows.map(({ street, city, updatedAt, ...r }): JobListRow => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),

@@ -6,9 +6,13 @@ import type { RoleName } from "@/lib/authz/permissions";
 
 type Value = string | Placeholder;
 
-/** The rule itself, for given values or placeholders. */
-function scopeFor(db: Db, role: RoleName, companyId: Value, userId: Value): SQL {
-  const company = eq(jobs.companyId, companyId);
+/**
+ * The rule itself, for given values or placeholders. `companyIndexed: false` writes the company
+ * test so SQLite will not drive the query from the company index (`+company_id = ?`): for a
+ * search whose few matches should drive it instead.
+ */
+function scopeFor(db: Db, role: RoleName, companyId: Value, userId: Value, companyIndexed = true): SQL {
+  const company = companyIndexed ? eq(jobs.companyId, companyId) : sql`+${jobs.companyId} = ${companyId}`;
   switch (role) {
     case "owner":
     case "auditor":
@@ -32,8 +36,11 @@ export function jobScope(db: Db, user: AuthUser): SQL {
  * The same rule with placeholders, for a prepared statement reused across requests: run it with
  * `scopeParams(user)`. The statement must be prepared per role (the rule's shape depends on it).
  */
-export function jobScopePrepared(db: Db, role: RoleName): SQL {
-  return scopeFor(db, role, sql.placeholder("scopeCompanyId"), sql.placeholder("scopeUserId"));
+export function jobScopePrepared(db: Db, role: RoleName, opts: { companyIndexed?: boolean } = {}): SQL {
+  return scopeFor(db, role, sql.placeholder("scopeCompanyId"), sql.placeholder("scopeUserId"), opts.companyIndexed ?? true);
 }
+
+/** Whether the role sees every job of its company (so company-wide figures, such as job counts, are theirs). */
+export const seesWholeCompany = (role: RoleName) => role === "owner" || role === "auditor";
 
 export const scopeParams = (user: AuthUser) => ({ scopeCompanyId: user.companyId, scopeUserId: user.id });

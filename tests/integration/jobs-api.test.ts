@@ -32,6 +32,19 @@ describe("GET /api/jobs", () => {
     expect((await list("q=%25")).json.total).toBe(0); // a literal % matches nothing, not everything
   });
 
+  it("gives the whole total with a full page, for every role (kept tally or count)", async () => {
+    actAs(ids.owner);
+    const all = await list("pageSize=3");
+    expect(all.json.jobs).toHaveLength(3);
+    expect(all.json.total).toBe(8);
+    expect((await list("pageSize=1&stage=intake")).json.total).toBe(2);
+    expect((await list("pageSize=1&q=Road")).json.total).toBe((await list("q=Road")).json.jobs.length);
+    actAs(ids.installer);
+    const mine = (await list("")).json.total;
+    expect(mine).toBeGreaterThan(1);
+    expect((await list("pageSize=1")).json.total).toBe(mine);
+  });
+
   it("matches the beginnings of words, in any order, and falls back to any substring", async () => {
     actAs(ids.auditor);
     const numbers = async (q: string) => (await list(`q=${encodeURIComponent(q)}`)).json.jobs.map((j) => j.number);
