@@ -12,7 +12,8 @@ import { AreaField, ExistingStackField, KindField, LabelField, OpeningsEditor, o
 
 export type RowActions = { duplicate: (i: number) => void; remove: (i: number) => void };
 
-type Meta = { className: string };
+/** Column widths in rem (a fixed layout, so every input keeps a usable width); sticky columns stay in view while the table scrolls sideways. */
+type Meta = { className: string; width: number };
 /** What the cells read that changes while typing. The column definitions themselves stay the same
  * objects (a new cell function would be a new component type, remounting the inputs and losing focus). */
 type TableMeta = { figures: Map<string, SurfaceFigures> | null; open: Set<string>; toggleOpen: (id: string) => void; actions: RowActions; units: "ip" | "si" };
@@ -56,16 +57,22 @@ export function SurfacesTable({
   const colCount = table.getVisibleLeafColumns().length;
   const lead = readOnly ? 0 : 1;
   const issueSig = rowIssueSignatures(ctx.issues, ctx.warnings);
+  const width = table.getVisibleLeafColumns().reduce((a, c) => a + (c.columnDef.meta as Meta).width, 0);
 
   return (
+    <>
+    <p className="text-sm text-ink-muted">One row per surface; the table scrolls sideways to its layer stacks, U and UA, with the label kept in view.</p>
     <div className="-mx-2 overflow-x-auto px-2 pb-1" data-testid="surface-table">
-      <table className="w-full min-w-[60rem] border-collapse text-sm" data-testid="surface-list">
+      <table className="w-full table-fixed border-collapse text-sm" style={{ minWidth: `${width}rem` }} data-testid="surface-list">
         <caption className="sr-only">Surfaces of the house: one row each, with its openings, layer stacks and heat loss</caption>
+        <colgroup>
+          {table.getVisibleLeafColumns().map((c) => <col key={c.id} style={{ width: `${(c.columnDef.meta as Meta).width}rem` }} />)}
+        </colgroup>
         <thead>
           {table.getHeaderGroups().map((g) => (
             <tr key={g.id} className="border-b border-line">
               {g.headers.map((h) => (
-                <th key={h.id} scope="col" className={`${th} ${(h.column.columnDef.meta as Meta | undefined)?.className ?? ""}`}>
+                <th key={h.id} scope="col" className={`${th} bg-white ${(h.column.columnDef.meta as Meta | undefined)?.className ?? ""}`}>
                   {h.isPlaceholder ? null : flexRender(h.column.columnDef.header, h.getContext())}
                 </th>
               ))}
@@ -112,34 +119,35 @@ export function SurfacesTable({
         </tfoot>
       </table>
     </div>
+    </>
   );
 }
 
 function surfaceColumns(readOnly: boolean): ColumnDef<AssessmentSurface>[] {
   const cols: ColumnDef<AssessmentSurface>[] = [
-    { id: "label", header: "Label", meta: { className: "min-w-36" }, cell: ({ row }) => <LabelField i={row.index} compact /> },
-    { id: "kind", header: "Kind", meta: { className: "w-28" }, cell: ({ row }) => <KindField i={row.index} compact /> },
-    { id: "orientation", header: "Facing", meta: { className: "w-28" }, cell: ({ row }) => <OrientationField i={row.index} compact /> },
-    { id: "area", header: "Gross ft²", meta: { className: "w-24" }, cell: ({ row }) => <AreaField i={row.index} compact /> },
+    { id: "label", header: "Label", meta: { className: `sticky ${readOnly ? "left-0" : "left-10"} z-10`, width: 10.5 }, cell: ({ row }) => <LabelField i={row.index} compact /> },
+    { id: "kind", header: "Kind", meta: { className: "", width: 6.75 }, cell: ({ row }) => <KindField i={row.index} compact /> },
+    { id: "orientation", header: "Facing", meta: { className: "", width: 7.5 }, cell: ({ row }) => <OrientationField i={row.index} compact /> },
+    { id: "area", header: "Gross ft²", meta: { className: "", width: 6 }, cell: ({ row }) => <AreaField i={row.index} compact /> },
     {
       id: "openings",
       header: "Openings",
-      meta: { className: "w-28" },
+      meta: { className: "", width: 7 },
       cell: ({ row, table }) => {
         const { open, toggleOpen } = metaOf(table);
         const s = row.original;
         const expanded = open.has(s.id);
         return (
-          <button type="button" className="btn-ghost min-h-10 w-full justify-between px-2 py-1 text-sm" aria-expanded={expanded} aria-controls={`openings-${s.id}`} aria-label={`Windows and doors in “${s.name}”: ${openingsSummary(s)}`} onClick={() => toggleOpen(s.id)}>
+          <button type="button" className="btn-ghost min-h-10 w-full justify-between gap-1 whitespace-nowrap px-2 py-1 text-sm" aria-expanded={expanded} aria-controls={`openings-${s.id}`} aria-label={`Windows and doors in “${s.name}”: ${openingsSummary(s)}`} onClick={() => toggleOpen(s.id)}>
             <span className="tabular-nums">{openingsSummary(s)}</span>
             <span aria-hidden="true">{expanded ? "▴" : "▾"}</span>
           </button>
         );
       },
     },
-    { id: "existing", header: "Existing layer stack", meta: { className: "min-w-44" }, cell: ({ row }) => <ExistingStackField i={row.index} compact /> },
-    { id: "proposed", header: "Proposed", meta: { className: "min-w-36" }, cell: ({ row }) => <ProposedField i={row.index} compact /> },
-    { id: "figures", header: ({ table }) => <>U / UA<span className="block font-normal normal-case">{U_UNIT[metaOf(table).units]} · {f.uaUnit(metaOf(table).units)}</span></>, meta: { className: "w-36 text-right" }, cell: ({ row, table }) => <SurfaceFiguresText figures={metaOf(table).figures?.get(row.original.id)} compact /> },
+    { id: "existing", header: "Existing layer stack", meta: { className: "", width: 13 }, cell: ({ row }) => <ExistingStackField i={row.index} compact /> },
+    { id: "proposed", header: "Proposed", meta: { className: "", width: 10 }, cell: ({ row }) => <ProposedField i={row.index} compact /> },
+    { id: "figures", header: ({ table }) => <>U / UA<span className="block font-normal normal-case">{U_UNIT[metaOf(table).units]} · {f.uaUnit(metaOf(table).units)}</span></>, meta: { className: "text-right", width: 9 }, cell: ({ row, table }) => <SurfaceFiguresText figures={metaOf(table).figures?.get(row.original.id)} compact /> },
   ];
   if (readOnly) return cols;
   return [
@@ -148,14 +156,14 @@ function surfaceColumns(readOnly: boolean): ColumnDef<AssessmentSurface>[] {
       header: ({ table }) => (
         <input type="checkbox" className="h-5 w-5" aria-label="Select every surface" checked={table.getIsAllRowsSelected()} ref={(el) => { if (el) el.indeterminate = table.getIsSomeRowsSelected(); }} onChange={table.getToggleAllRowsSelectedHandler()} />
       ),
-      meta: { className: "w-10" },
+      meta: { className: "sticky left-0 z-10", width: 2.5 },
       cell: ({ row }) => <input type="checkbox" className="h-5 w-5" aria-label={`Select “${row.original.name}”`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
     },
     ...cols,
     {
       id: "actions",
       header: () => <span className="sr-only">Row actions</span>,
-      meta: { className: "w-40" },
+      meta: { className: "", width: 10.5 },
       cell: ({ row, table }) => (
         <div className="flex gap-1">
           <button type="button" className="btn-ghost min-h-10 px-2 py-1 text-sm" aria-label={`Duplicate “${row.original.name}”`} onClick={() => metaOf(table).actions.duplicate(row.index)}>Duplicate</button>
@@ -197,6 +205,9 @@ type RowProps = {
   colCount: number;
 };
 
+/** The label (and the selection box before it) stay in view while the table scrolls sideways. */
+const sticky = (id: string, readOnly: boolean) => (id === "select" ? "sticky left-0 z-10" : id === "label" ? `sticky ${readOnly ? "left-0" : "left-10"} z-10 shadow-[1px_0_0_var(--color-line)]` : "");
+
 const sameFigures = (a: SurfaceFigures | undefined, b: SurfaceFigures | undefined) =>
   a === b || (!!a && !!b && a.uBefore === b.uBefore && a.uAfter === b.uAfter && a.uaBefore === b.uaBefore && a.uaAfter === b.uaAfter);
 
@@ -210,9 +221,9 @@ const SurfaceRow = memo(
     const lead = readOnly ? 0 : 1;
     return (
       <AssessmentProvider value={ctx}>
-        <tr className={`border-b border-line/60 align-top ${selected ? "bg-spruce-50" : ""}`} data-testid={`surface-${index}`} data-surface-id={surface.id}>
+        <tr className="border-b border-line/60 align-top" data-testid={`surface-${index}`} data-surface-id={surface.id}>
           {row.getVisibleCells().map((c) => (
-            <td key={c.id} className={`px-2 py-1.5 ${c.column.id === "figures" ? "pt-2.5 text-right" : ""} ${c.column.id === "select" ? "pt-3.5" : ""}`}>
+            <td key={c.id} className={`px-2 py-1.5 ${c.column.id === "figures" ? "pt-2.5 text-right" : ""} ${c.column.id === "select" ? "pt-3.5" : ""} ${sticky(c.column.id, readOnly)} ${selected ? "bg-spruce-50" : "bg-white"}`}>
               {flexRender(c.column.columnDef.cell, c.getContext())}
             </td>
           ))}

@@ -13,12 +13,16 @@ declare global {
   }
 }
 
+const USER_EVENTS = new Set(["input", "change", "click", "keydown", "keyup", "keypress", "pointerdown", "pointerup", "mousedown", "mouseup", "paste", "cut", "drop", "submit"]);
+
 type Pending = { doc: AssessmentDoc; at: number; event: Event };
 const queue: Pending[] = [];
 
 /** Call with the document an edit produced, while the edit's event is being handled. */
 export function noteEdit(doc: AssessmentDoc) {
-  const event = typeof window === "undefined" ? undefined : window.event;
+  const current = typeof window === "undefined" ? undefined : window.event;
+  // Only a person's input counts; scheduler tasks (message events) and timers run derived edits.
+  const event = current && USER_EVENTS.has(current.type) ? current : undefined;
   if (!event) {
     // A derived edit outside any event (e.g. a price refresh): the latest pending entry now waits for it.
     const last = queue.at(-1);

@@ -36,6 +36,12 @@ describe.each(["desktop", "phone"] as const)("assessment screens at %s size", (s
       await section.scrollIntoViewIfNeeded();
       await section.screenshot({ path: path.join(__dirname, ".artifacts", `screen-${name}-${size}.png`) });
     }
+    if (size === "desktop") {
+      // The rest of the surfaces table, scrolled sideways (the label column stays in view).
+      const table = page.getByTestId("surface-table");
+      await table.evaluate((el) => el.scrollTo({ left: el.scrollWidth }));
+      await page.locator("section").filter({ has: page.getByRole("heading", { name: "Surfaces", level: 2 }) }).screenshot({ path: path.join(__dirname, ".artifacts", "screen-surfaces-scrolled-desktop.png") });
+    }
     // The results column scrolls on its own on a desktop; let it run full length for the picture.
     await page.addStyleTag({ content: "[data-testid=results]{max-height:none!important;overflow:visible!important;position:static!important}" });
     await page.getByTestId("results").screenshot({ path: path.join(__dirname, ".artifacts", `screen-results-${size}.png`) });
