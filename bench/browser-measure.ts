@@ -29,15 +29,15 @@ export async function measureKeystrokes(page: Page, field: Locator, n: number, p
 
 /** Run before navigation: notes (performance.now) when the form and the results panel first appear. */
 export async function watchPanels(page: Page) {
-  await page.addInitScript(() => {
-    const w = window as unknown as { __warmsteadSeen?: Record<string, number> };
-    const seen: Record<string, number> = (w.__warmsteadSeen = {});
+  // A string, not a function: tsx/esbuild may wrap named functions in helpers the page does not have.
+  await page.addInitScript(`(() => {
+    const seen = (window.__warmsteadSeen = {});
     const check = () => {
-      for (const id of ["surface-list", "results-panel"]) if (!(id in seen) && document.querySelector(`[data-testid="${id}"]`)) seen[id] = performance.now();
+      for (const id of ["surface-list", "results-panel"]) if (!(id in seen) && document.querySelector('[data-testid="' + id + '"]')) seen[id] = performance.now();
       if (!("chart" in seen) && document.querySelector(".recharts-wrapper")) seen.chart = performance.now();
     };
     new MutationObserver(check).observe(document, { childList: true, subtree: true });
-  });
+  })();`);
 }
 
 type ScriptEntry = { url: string; start: number; bytes: number; transfer: number };
