@@ -1,20 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { CrewLogScreen } from "@/components/crew/crew-log-screen";
 import { JobTabs } from "@/components/jobs/job-tabs";
 import { StageBadge } from "@/components/jobs/stage-badge";
 import { can } from "@/lib/authz/permissions";
-import { getJob } from "@/lib/data/jobs";
-import { requireStaffPage } from "@/lib/session";
+import { requireJobPage } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Crew log" };
 
 export default async function CrewLogPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requireStaffPage("crewlog:read");
-  const { id } = await params;
-  const job = await getJob(user, id);
-  if (!job) notFound();
+  const { user, job } = await requireJobPage(params, "crewlog:read");
   const back = can(user.role, "crewlog:write") ? { href: "/today", label: "← Today" } : { href: `/jobs/${job.id}`, label: `← Job #${job.number}` };
   return (
     <>

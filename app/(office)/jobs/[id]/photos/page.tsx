@@ -1,20 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PhotosWorkspace } from "@/components/photos/photos-workspace";
 import { can } from "@/lib/authz/permissions";
-import { getJob } from "@/lib/data/jobs";
 import { listPhotoSurfaces } from "@/lib/data/photos";
-import { requireStaffPage } from "@/lib/session";
+import { requireJobPage } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Photos" };
 
 export default async function JobPhotosPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requireStaffPage("photos:read");
-  const { id } = await params;
-  const job = await getJob(user, id);
-  if (!job) notFound();
-  const surfaces = (await listPhotoSurfaces(user, id)) ?? [];
+  const { user, job } = await requireJobPage(params, "photos:read");
+  const surfaces = (await listPhotoSurfaces(user, job.id)) ?? [];
   return (
     <>
       <p className="mb-2 text-sm"><Link href={`/jobs/${job.id}`} className="text-spruce-700 underline">← Job #{job.number}</Link></p>
