@@ -71,6 +71,8 @@ const ok = (pass: boolean) => (pass ? "ok" : "MISSED");
 export async function runPdfBench() {
   const snapshot = demoSnapshot("savings-report");
   console.log("\n## PDF: demo savings report vs a plain React-PDF document of the same page count");
+  // The server renders PDFs with React's production build; `npm run bench` sets NODE_ENV for that.
+  console.log(`React build: ${process.env.NODE_ENV === "production" ? "production" : "development (slower: run through npm run bench, or NODE_ENV=production)"}`);
 
   const t0 = performance.now();
   const first = await renderSnapshotPdf(snapshot);
