@@ -85,3 +85,37 @@ export async function firstLoad(page: Page) {
     chartInInitialHtml: chart.some((c) => html.includes(new URL(c.url).pathname)),
   };
 }
+
+type ProfileNode = { id: number; callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number }; children?: number[] };
+
+/**
+ * Starts Chromium's counters (Performance.getMetrics) and its CPU profiler on the page; `stop(n)`
+ * prints, per keystroke over `n`, the script, style and layout time and the 25 functions with the
+ * most self time (minified names, with their file and position).
+ */
+export async function startProfile(page: Page) {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send("Performance.enable");
+  await cdp.send("Profiler.enable");
+  await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
+  const metrics = async () => Object.fromEntries((await cdp.send("Performance.getMetrics")).metrics.map((m) => [m.name, m.value])) as Record<string, number>;
+  const before = await metrics();
+  await cdp.send("Profiler.start");
+  return {
+    async stop(n: number) {
+      const { profile } = (await cdp.send("Profiler.stop")) as unknown as { profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] } };
+      const after = await metrics();
+      const per = (k: string) => `${(((after[k] ?? 0) - (before[k] ?? 0)) * 1000 / n).toFixed(1)} ms`;
+      console.log(`per keystroke: task ${per("TaskDuration")}, script ${per("ScriptDuration")}, style ${per("RecalcStyleDuration")}, layout ${per("LayoutDuration")}`);
+      const byId = new Map(profile.nodes.map((x) => [x.id, x]));
+      const self = new Map<string, number>();
+      profile.samples.forEach((id, i) => {
+        const f = byId.get(id)!.callFrame;
+        const key = `${f.functionName || "(anonymous)"} ${f.url.split("/").pop()}:${f.lineNumber + 1}:${f.columnNumber + 1}`;
+        self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0) / 1000);
+      });
+      for (const [key, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`${(ms / n).toFixed(2).padStart(7)} ms/key  ${key}`);
+      await cdp.detach();
+    },
+  };
+}

@@ -5,7 +5,8 @@
 // JavaScript the page loads before its chart code, and whether the recharts chunk waits for
 // the results panel. Needs a production build (`npm run build`, or NEXT_DIST_DIR=<dir> npx next build);
 // without one it says so and prints nothing else. Never fails on a missed target.
-// Run: npx tsx bench/browser.ts (or through runBrowserBench()).
+// Run: npx tsx bench/browser.ts (or through runBrowserBench()); BENCH_PROFILE=1 adds, per
+// keystroke, Chromium's script / style / layout time and the functions with the most self time.
 import { spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
@@ -17,7 +18,7 @@ import { applyMigrations } from "@/db/migrate";
 import { demoPassword, seedDatabase } from "@/db/seed";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import { largeHouseDoc } from "@/lib/assessment/large-house";
-import { firstLoad, measureKeystrokes, summarise, watchPanels } from "./browser-measure";
+import { firstLoad, measureKeystrokes, startProfile, summarise, watchPanels } from "./browser-measure";
 
 const root = path.resolve(import.meta.dirname, "..");
 const PORT = Number(process.env.BENCH_BROWSER_PORT ?? 3191);
@@ -88,7 +89,10 @@ export async function runBrowserBench() {
     const load = await firstLoad(page);
     const field = page.getByTestId("surface-30").getByLabel("Gross area (ft²)");
     await measureKeystrokes(page, field, 4); // warm-up: first renders, JIT
+    // BENCH_PROFILE=1: where the milliseconds go while typing (Chromium's own counters and a CPU profile).
+    const profiling = process.env.BENCH_PROFILE === "1" ? await startProfile(page) : null;
     const s = summarise(await measureKeystrokes(page, field, KEYSTROKES));
+    if (profiling) await profiling.stop(KEYSTROKES);
 
     console.log("| figure | value | target |");
     console.log("| --- | --- | --- |");

@@ -185,8 +185,9 @@ function BulkBar({ ids, onDone }: { ids: string[]; onDone: () => void }) {
           className="btn-primary"
           disabled={!stackKey}
           onClick={() => {
-            const r = bulkSetAssembly(doc, ids, stackKey);
-            update(() => r.doc);
+            // From the newest document (the one drawn here can trail a keystroke behind).
+            let r = bulkSetAssembly(doc, ids, stackKey);
+            update((d) => (r = bulkSetAssembly(d, ids, stackKey)).doc);
             setSaid(`Existing layer stack set on ${plural(r.applied, "surface")}${r.skipped ? `; ${plural(r.skipped, "surface")} of another kind left as they were` : ""}.`);
             setStackKey("");
           }}

@@ -3,28 +3,13 @@
 // An upgrade's priced lines, built from the company price book by the same function the proposal
 // uses (lib/documents/proposal-lines.ts), with this job's changes: a quantity or a unit price per
 // line, or the whole installed cost with a reason. Shown only to roles that may see prices.
-import { useEffect, useMemo, useState } from "react";
-import useSWR from "swr";
-import { analyzeHouse, type HouseAnalysis } from "@/calc";
 import type { AssessmentDoc, AssessmentUpgrade } from "@/lib/assessment/doc";
-import { costsMatch, priceDoc, withCosts } from "@/lib/assessment/pricing";
-import { toHouseInput } from "@/lib/assessment/to-house-input";
 import { DEFAULT_BAGS_PER_CREW_HOUR, DEFAULT_CFM50_CUT_PER_CREW_HOUR, type JobPricing, type PricedLine, type UpgradePrice } from "@/lib/documents/proposal-lines";
-import { fetcher } from "@/lib/hooks/fetcher";
-import { priceBookKey, type PriceBookResponse } from "@/lib/hooks/use-price-book";
 import { formatDollars } from "@/lib/money";
 import { setAt, useAssessmentCtx } from "./context";
 import { NumField, TextField } from "./fields";
 
 type Pricing = AssessmentUpgrade["pricing"];
-
-function analyzeQuietly(doc: AssessmentDoc): HouseAnalysis | null {
-  try {
-    return analyzeHouse(toHouseInput(doc));
-  } catch {
-    return null; // the workspace shows calc's reasons beside the fields
-  }
-}
 
 /** Why a line's quantity is what it is, for the hint under it. */
 const quantityHint: Record<string, string> = {
@@ -35,33 +20,6 @@ const quantityHint: Record<string, string> = {
   hours: `1 crew hour per ${DEFAULT_CFM50_CUT_PER_CREW_HOUR} CFM50 taken out (an invented demo figure): change it for this house.`,
   item: "Windows this upgrade replaces.",
 };
-
-/**
- * Prices the document live in the browser and keeps each upgrade's `costUSD` equal to its priced
- * cost, so the results panel's payback and SIR use it (the second of the two passes in
- * lib/assessment/pricing.ts; the server prices again on save).
- */
-export function useLivePricing(): JobPricing | null {
-  const { doc, update, readOnly, pricesVisible, analysis: provided } = useAssessmentCtx();
-  // The workspace passes its live analysis; without one, price from an analysis of our own.
-  const own = useMemo(() => (provided === undefined && pricesVisible ? analyzeQuietly(doc) : null), [provided, pricesVisible, doc]);
-  const live = provided === undefined ? own : provided;
-  // While the input has an error (a negative quantity makes a negative cost, which calc refuses),
-  // the lines are priced from the last analysis that worked, so they stay on screen to be fixed.
-  const [lastGood, setLastGood] = useState(live ?? null);
-  if (live && live !== lastGood) setLastGood(live);
-  const analysis = live ?? lastGood;
-  const { data } = useSWR<PriceBookResponse>(pricesVisible ? priceBookKey : null, fetcher, { keepPreviousData: true });
-  const items = useMemo(() => data?.items.filter((i) => i.active) ?? null, [data]);
-  // The analysis trails the document by a render (it is deferred): price only when it is the same list.
-  const aligned = !!analysis && analysis.upgrades.length === doc.upgrades.length && analysis.upgrades.every((u, i) => u.type === doc.upgrades[i]!.type);
-  const pricing = useMemo(() => (items && aligned && analysis ? priceDoc(doc, analysis, items) : null), [doc, analysis, items, aligned]);
-  useEffect(() => {
-    if (readOnly || !pricing || costsMatch(doc, pricing)) return;
-    update((d) => (d.upgrades.length === pricing.upgrades.length ? withCosts(d, pricing) : d));
-  }, [doc, pricing, readOnly, update]);
-  return pricing;
-}
 
 function setPricing(d: AssessmentDoc, i: number, change: (p: NonNullable<Pricing>) => NonNullable<Pricing>): AssessmentDoc {
   const next = change({ ...(d.upgrades[i]?.pricing ?? {}) });

@@ -4,7 +4,7 @@ import { MEASURE_LIFE_YEARS } from "@/calc";
 import type { AssessmentUpgrade } from "@/lib/assessment/doc";
 import { setAt, useAssessmentCtx } from "./context";
 import { NumField, TextField } from "./fields";
-import { PricingSummary, UpgradePricingPanel, useLivePricing } from "./upgrade-pricing";
+import { PricingSummary, UpgradePricingPanel } from "./upgrade-pricing";
 
 const labels: Record<AssessmentUpgrade["type"], string> = { "dense-pack-walls": "Dense-pack walls", "attic-insulation": "Attic insulation", "air-sealing": "Air sealing", windows: "Windows" };
 
@@ -19,8 +19,8 @@ function fresh(type: AssessmentUpgrade["type"], targetCfm50?: number | null): As
 }
 
 export function UpgradesSection() {
-  const { doc, update, readOnly, pricesVisible } = useAssessmentCtx();
-  const pricing = useLivePricing();
+  // Priced by the workspace, in the same pass as the results (lib/assessment/pricing.ts).
+  const { doc, update, readOnly, pricesVisible, pricing = null } = useAssessmentCtx();
   const move = (i: number, by: -1 | 1) => update((d) => {
     const list = [...d.upgrades];
     const [u] = list.splice(i, 1);

@@ -1,15 +1,20 @@
 "use client";
 
-import { useCallback, useDeferredValue, useEffect, useMemo } from "react";
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
+import useSWR from "swr";
 import { analyzeHouse, CalcInputError, type AssemblyDef, type HouseAnalysis } from "@/calc";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
+import { priceDoc, twoPass } from "@/lib/assessment/pricing";
 import { docPath, toHouseInput } from "@/lib/assessment/to-house-input";
-import { useAssessment, type Issue } from "@/lib/hooks/use-assessment";
+import type { JobPricing } from "@/lib/documents/proposal-lines";
+import { fetcher } from "@/lib/hooks/fetcher";
+import { docIssues, useAssessment, type Issue } from "@/lib/hooks/use-assessment";
+import { priceBookKey, type PriceBookResponse } from "@/lib/hooks/use-price-book";
 import { useUnitPreference } from "@/lib/hooks/use-preferences";
-import { AssessmentProvider, groupIssues } from "./context";
+import { AssessmentProvider, groupIssues, issueSignature, SectionGate, type AssessmentCtx } from "./context";
 import { HouseSection } from "./house-section";
 import { LeakageSection } from "./leakage-section";
-import { ResultsPanel } from "./results";
+import { ResultsPanel as Panel } from "./results";
 import { SaveStatusBadge } from "./save-status";
 import { StacksSection } from "./stacks-section";
 import { SurfacesSection } from "./surfaces-section";
@@ -30,35 +35,84 @@ function analyzeLive(doc: AssessmentDoc): Live {
   }
 }
 
+// Each section re-renders only when its props change (the workspace re-renders on every keystroke).
+const Results = memo(Panel);
+const House = memo(HouseSection);
+const Surfaces = memo(SurfacesSection);
+const Stacks = memo(StacksSection);
+const Leakage = memo(LeakageSection);
+const Upgrades = memo(UpgradesSection);
+
+/** The parts of the document, messages and figures each section shows: it re-renders when one of them changes. */
+function sectionDeps(ctx: AssessmentCtx) {
+  const d = ctx.doc;
+  return {
+    house: [d.house, d.heating, issueSignature(ctx, ["house", "heating"])],
+    surfaces: [d.surfaces, d.assemblies, d.upgrades, ctx.analysis, issueSignature(ctx, ["surfaces"])],
+    stacks: [d.assemblies, issueSignature(ctx, ["assemblies"])],
+    leakage: [d.leakage, d.house.volumeFt3, issueSignature(ctx, ["leakage"])],
+    // Of the surfaces, the upgrades list only the walls' names (to pick which to dense-pack).
+    upgrades: [d.upgrades, d.surfaces.filter((s) => s.kind === "wall").map((s) => `${s.id}\u0000${s.name}`).join("\u0001"), ctx.pricing, issueSignature(ctx, ["upgrades"])],
+  };
+}
+
+const EMPTY: Issue[] = [];
+/** The last analysis that worked is of the same list of upgrades as the document. */
+const sameUpgrades = (a: { upgrades: readonly { type?: string; upgradeId?: string }[] }, d: AssessmentDoc) =>
+  a.upgrades.length === d.upgrades.length && a.upgrades.every((u, i) => (u.type === undefined || u.type === d.upgrades[i]!.type) && (u.upgradeId === undefined || u.upgradeId === d.upgrades[i]!.id));
+
 export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: string; initialUnits?: "ip" | "si" }) {
   const a = useAssessment(jobId);
   const { units, setUnits, error: unitsError } = useUnitPreference(initialUnits);
-  const deferred = useDeferredValue(a.doc);
-  const live = useMemo(() => (deferred ? analyzeLive(deferred) : null), [deferred]);
+  // The analysis, prices and reasons are worked out with each edit (a few ms), so the fields and
+  // the per-surface figures never trail the document; only the results panel is drawn deferred.
+  const pricesVisible = a.loaded?.pricesVisible ?? false;
+  const { data: book } = useSWR<PriceBookResponse>(pricesVisible ? priceBookKey : null, fetcher, { keepPreviousData: true });
+  const items = useMemo(() => book?.items.filter((i) => i.active) ?? null, [book]);
+  // Both pricing passes (lib/assessment/pricing.ts) in one place: analyse, price, analyse again
+  // with the costs when they differ; the results panel shows the second.
+  const live = useMemo(() => {
+    if (!a.doc) return null;
+    if (!items) return { ...analyzeLive(a.doc), pricing: null as JobPricing | null };
+    const r = twoPass(a.doc, items, analyzeLive);
+    return { ...r.result, pricing: r.pricing };
+  }, [a.doc, items]);
+  // While the input has an error, the lines are priced from the last analysis that worked, so they stay on screen to be fixed.
+  const [lastGood, setLastGood] = useState<HouseAnalysis | null>(null);
+  if (live?.analysis && live.analysis !== lastGood) setLastGood(live.analysis);
+  const pricing = useMemo(
+    () => live?.pricing ?? (items && a.doc && lastGood && sameUpgrades(lastGood, a.doc) ? priceDoc(a.doc, lastGood, items) : null),
+    [live, items, a.doc, lastGood],
+  );
+  const local = useMemo(() => (a.doc ? docIssues(a.doc) : EMPTY), [a.doc]);
 
   const edit = a.update;
   // One function for the whole life of the page, so memoised rows can tell nothing else changed.
   const update = useCallback((change: (d: AssessmentDoc) => AssessmentDoc) => noteEdit(edit(change)), [edit]);
 
+  // The results panel (the heaviest part of the page: tables, the chart) renders after the
+  // keystroke's own frame, from the same analysis.
+  const computed = useMemo(() => (live && a.doc ? { live, doc: a.doc } : null), [live, a.doc]);
+  const shown = useDeferredValue(computed);
   // Keystroke → results painted (components/assessment/timings.ts), for the browser test and the bench.
   useEffect(() => {
-    if (live && deferred) noteResults(deferred);
-  }, [live, deferred]);
+    if (shown) noteResults(shown.doc);
+  }, [shown]);
+
+  const readOnly = !a.loaded?.canEdit;
+  const issues = useMemo(() => groupIssues([...local, ...a.blocking, ...(live?.issues ?? EMPTY)]), [local, a.blocking, live]);
+  const warnings = useMemo(() => groupIssues(live?.warnings ?? EMPTY), [live]);
+  const doc = a.doc;
+  const ctx = useMemo<AssessmentCtx | null>(
+    () => (doc ? { doc, update, readOnly, pricesVisible, units, issues, warnings, analysis: live?.analysis ?? null, pricing } : null),
+    [doc, update, readOnly, pricesVisible, units, issues, warnings, live, pricing],
+  );
+  const deps = useMemo(() => (ctx ? sectionDeps(ctx) : null), [ctx]);
+  const resultIssues = shown?.live.issues.length ? shown.live.issues : undefined;
 
   if (a.loadError) return <p role="status" className="rounded-md bg-danger-bg px-3 py-2 text-danger">{a.loadError.message}</p>;
-  if (!a.doc || !a.loaded || !live) return <p className="text-ink-muted">Loading the assessment…</p>;
+  if (!a.doc || !a.loaded || !live || !shown || !ctx || !deps) return <p className="text-ink-muted">Loading the assessment…</p>;
 
-  const issues = groupIssues([...a.blocking, ...live.issues]);
-  const ctx = {
-    doc: a.doc,
-    update,
-    readOnly: !a.loaded.canEdit,
-    pricesVisible: a.loaded.pricesVisible,
-    units,
-    issues,
-    warnings: groupIssues(live.warnings),
-    analysis: live.analysis,
-  };
   return (
     <AssessmentProvider value={ctx}>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
@@ -76,14 +130,14 @@ export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: str
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_28rem]">
         <div className="min-w-0 space-y-6">
-          <HouseSection />
-          <SurfacesSection />
-          <StacksSection companyLibrary={a.loaded.companyLibrary as AssemblyDef[]} />
-          <LeakageSection />
-          <UpgradesSection />
+          <SectionGate ctx={ctx} deps={deps.house}><House /></SectionGate>
+          <SectionGate ctx={ctx} deps={deps.surfaces}><Surfaces /></SectionGate>
+          <SectionGate ctx={ctx} deps={[...deps.stacks, a.loaded.companyLibrary]}><Stacks companyLibrary={a.loaded.companyLibrary as AssemblyDef[]} /></SectionGate>
+          <SectionGate ctx={ctx} deps={deps.leakage}><Leakage /></SectionGate>
+          <SectionGate ctx={ctx} deps={deps.upgrades}><Upgrades /></SectionGate>
         </div>
         <aside aria-label="Results" className="min-w-0 lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto" data-testid="results">
-          <ResultsPanel analysis={live.analysis} units={units} error={live.issues.length ? live.issues : undefined} />
+          <Results analysis={shown.live.analysis} units={units} error={resultIssues} />
         </aside>
       </div>
     </AssessmentProvider>

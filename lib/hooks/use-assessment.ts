@@ -22,10 +22,45 @@ function readPending(jobId: string): Pending | null {
   }
 }
 
-/** Local structural check with the API's own schema: field → reasons; empty when the document can be sent. */
+type Part = keyof typeof assessmentDocSchema.shape;
+const parts = Object.keys(assessmentDocSchema.shape) as Part[];
+const surfaceSchema = assessmentDocSchema.shape.surfaces.element;
+const NONE: Issue[] = [];
+// A part's reasons, remembered per object: an edit replaces only the objects on its path
+// (context.tsx setAt), so a keystroke checks the edited surface and the parts above it again,
+// not the other 59 surfaces.
+const checked = new WeakMap<object, { path: string; message: string }[]>();
+
+type Schema = { safeParse: (v: unknown) => { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } } };
+
+/** One part's reasons, with paths under `prefix` (remembered without it: a surface can move). */
+function check(value: unknown, schema: Schema, prefix: string): Issue[] {
+  const key = typeof value === "object" && value !== null ? value : null;
+  let found = key ? checked.get(key) : undefined;
+  if (!found) {
+    const r = schema.safeParse(value);
+    found = r.success ? [] : r.error!.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
+    if (key) checked.set(key, found);
+  }
+  return found.map((i) => ({ path: i.path ? `${prefix}.${i.path}` : prefix, message: i.message }));
+}
+
+/**
+ * Local structural check with the API's own schema: field → reasons; empty when the document can
+ * be sent. The same schema and messages as one `assessmentDocSchema.safeParse`, part by part (and
+ * surface by surface), with the reasons of an unchanged part remembered.
+ */
 export function docIssues(doc: AssessmentDoc): Issue[] {
-  const r = assessmentDocSchema.safeParse(doc);
-  return r.success ? [] : r.error.issues.map((i) => ({ path: i.path.join("."), message: i.message }));
+  if (!doc || typeof doc !== "object" || !Array.isArray(doc.surfaces) || doc.surfaces.length > 1000) {
+    const r = assessmentDocSchema.safeParse(doc);
+    return r.success ? NONE : r.error.issues.map((i) => ({ path: i.path.join("."), message: i.message }));
+  }
+  const out: Issue[] = [];
+  for (const part of parts) {
+    if (part === "surfaces") doc.surfaces.forEach((s, i) => out.push(...check(s, surfaceSchema, `surfaces.${i}`)));
+    else out.push(...check(doc[part], assessmentDocSchema.shape[part] as Schema, part));
+  }
+  return out.length ? out : NONE;
 }
 
 /**
@@ -38,7 +73,8 @@ export function useAssessment(jobId: string) {
   const [doc, setDoc] = useState<AssessmentDoc | null>(null);
   const [status, setStatus] = useState<SaveStatus>("loading");
   const [message, setMessage] = useState<string | null>(null);
-  const [blocking, setBlocking] = useState<Issue[]>([]);
+  /** What the server refused in the last save (422), by field. */
+  const [blocking, setBlocking] = useState<Issue[]>(NONE);
   const version = useRef(0);
   const latest = useRef<AssessmentDoc | null>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
@@ -48,9 +84,11 @@ export function useAssessment(jobId: string) {
   const send = useCallback(async () => {
     const current = latest.current;
     if (!current || inFlight.current) return;
-    const issues = docIssues(current);
-    setBlocking(issues);
-    if (issues.length) return setStatus("invalid");
+    // The reasons themselves are shown from docIssues by the workspace; here they only stop the save.
+    if (docIssues(current).length) {
+      setBlocking(NONE);
+      return setStatus("invalid");
+    }
     if (typeof navigator !== "undefined" && !navigator.onLine) return setStatus("offline");
     inFlight.current = true;
     setStatus("saving");
@@ -125,7 +163,9 @@ export function useAssessment(jobId: string) {
       setDoc(next);
       localStorage.setItem(storageKey(jobId), JSON.stringify({ baseVersion: version.current, doc: next, at: Date.now() }));
       setStatus((s) => (s === "conflict" ? s : "pending"));
-      setBlocking(docIssues(next));
+      // The document's own reasons come from docIssues in the workspace (from the rendered copy);
+      // what the server said about an earlier copy no longer applies.
+      setBlocking((b) => (b.length ? NONE : b));
       clearTimeout(timer.current);
       timer.current = setTimeout(() => void send(), SAVE_DELAY_MS);
       return next;
