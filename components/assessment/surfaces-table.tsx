@@ -62,7 +62,7 @@ export function SurfacesTable({
   return (
     <>
     <p className="text-sm text-ink-muted">One row per surface; the table scrolls sideways to its layer stacks, U and UA, with the label kept in view.</p>
-    <div className="overflow-x-auto pb-1" data-testid="surface-table">
+    <div className="overflow-x-auto pb-1 [contain:content]" data-testid="surface-table">
       <table className="w-full table-fixed border-collapse text-sm" style={{ minWidth: `${width}rem` }} data-testid="surface-list">
         <caption className="sr-only">Surfaces of the house: one row each, with its openings, layer stacks and heat loss</caption>
         <colgroup>

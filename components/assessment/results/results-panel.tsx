@@ -26,7 +26,7 @@ export type ResultsPanelProps = {
 export function ResultsPanel({ analysis, units, error }: ResultsPanelProps) {
   const invalid = Boolean(error && error.length > 0);
   return (
-    <div className="@container w-full min-w-0 space-y-4 text-base text-charcoal" data-testid="results-panel">
+    <div className="@container w-full min-w-0 space-y-4 text-base text-charcoal [contain:content]" data-testid="results-panel">
       <h2 className="font-display text-2xl font-semibold text-spruce-900">Results</h2>
       <div aria-live="polite" className="contents">
         {invalid ? <InputErrors issues={error!} /> : null}
