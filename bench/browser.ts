@@ -19,6 +19,7 @@ import { demoPassword, seedDatabase } from "@/db/seed";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
 import { largeHouseDoc } from "@/lib/assessment/large-house";
 import { firstLoad, measureKeystrokes, startProfile, summarise, watchPanels } from "./browser-measure";
+import { waitForServer } from "./server";
 
 const root = path.resolve(import.meta.dirname, "..");
 const PORT = Number(process.env.BENCH_BROWSER_PORT ?? 3191);
@@ -26,18 +27,6 @@ const base = `http://127.0.0.1:${PORT}`;
 const KEYSTROKES = Number(process.env.BENCH_KEYSTROKES ?? 40);
 const TARGET_MS = 100;
 const chromiumPath = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
-
-async function waitFor(url: string) {
-  for (let i = 0; i < 240; i++) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      /* starting */
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`no answer from ${url}`);
-}
 
 const kib = (b: number) => `${(b / 1024).toFixed(0)} KiB`;
 
@@ -65,7 +54,7 @@ export async function runBrowserBench() {
   });
   const browser = await chromium.launch({ executablePath: chromiumPath, headless: true, args: ["--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking"] });
   try {
-    await waitFor(`${base}/api/health`);
+    await waitForServer(`${base}/api/health`);
     const context = await browser.newContext({ baseURL: base, viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     await page.goto("/sign-in");

@@ -13,6 +13,7 @@ import { applyMigrations } from "@/db/migrate";
 import { clients, houses, jobs } from "@/db/schema";
 import { demoCompanyId, demoPassword, seedDatabase, seedId } from "@/db/seed";
 import { jobStages } from "@/lib/stages";
+import { waitForServer } from "./server";
 
 const root = path.resolve(import.meta.dirname, "..");
 const PORT = 3190;
@@ -45,18 +46,6 @@ export async function seedManyJobs(url: string, n: number) {
     });
   }
   db.$client.close();
-}
-
-async function waitFor(url: string) {
-  for (let i = 0; i < 240; i++) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      /* starting */
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`no answer from ${url}`);
 }
 
 /** Signs in through next-auth's own endpoints and returns the session cookie. */
@@ -101,7 +90,7 @@ export async function runJobsBench() {
     stdio: "ignore",
   });
   try {
-    await waitFor(`${base}/api/health`);
+    await waitForServer(`${base}/api/health`);
     const cookie = await sessionCookie("owner@kestrelbay.example");
     await load("/api/health"); // warm-up
     await load("/api/jobs", cookie);
