@@ -7,10 +7,10 @@ import { checkWall } from "./crew-check";
 import { densePackEstimate, DEFAULT_STOREY_HEIGHT_FT, type DensePackEstimate } from "./dense-pack";
 import { CalcInputError } from "./errors";
 import { annualHeating, DEFAULT_GRID_LB_PER_KWH, type AnnualHeating } from "./energy";
-import { computeEnvelope, designHeatLoad, envelopeTotals, type UAByComponent } from "./envelope";
+import { designHeatLoad, surfaceResult, sumByComponent, type DesignLoad, type EnvelopeResult, type SurfaceDef, type SurfaceResult, type UAByComponent } from "./envelope";
 import { MEASURE_LIFE_YEARS, savingsToInvestment, simplePayback, upvEscalated } from "./economics";
-import { computeInfiltration } from "./infiltration";
-import { indoorDewPointF, moistureScreen } from "./moisture";
+import { computeInfiltration, type InfiltrationOptions, type InfiltrationResult } from "./infiltration";
+import { indoorDewPointF, moistureScreener, type MoistureScreen } from "./moisture";
 import type { HouseInput, HouseInputParsed } from "./schema";
 import { applyUpgrade, type HouseState } from "./upgrades";
 import { prepareHouseInput, type Prepared } from "./validate";
@@ -18,40 +18,85 @@ import { ventilation62_2 } from "./ventilation";
 import { softWarningsParsed } from "./warnings";
 import { METHOD_NOTES } from "./method-notes";
 
-type Ctx = { h: HouseInputParsed; hdd65: number; designF: number; cache: WeakMap<AssemblyDef, AssemblyResult> };
 
-function assemblyOf(ctx: Ctx, state: HouseState) {
-  return (key: string, path: string) => {
-    const def = state.assemblies.get(key);
-    if (!def) throw CalcInputError.at(path, `no assembly "${key}"`);
-    let r = ctx.cache.get(def);
-    if (!r) { r = computeAssembly(def, path); ctx.cache.set(def, r); }
-    return r;
-  };
+type Ctx = { h: HouseInputParsed; hdd65: number; designF: number; inf: InfiltrationOptions; lastInfiltration: InfiltrationResult | null };
+
+function assemblyDef(state: HouseState, key: string, path: string): AssemblyDef {
+  const def = state.assemblies.get(key);
+  if (!def) throw CalcInputError.at(path, `no assembly "${key}"`);
+  return def;
 }
 
-function evaluate(ctx: Ctx, state: HouseState) {
-  const envelope = computeEnvelope(state.surfaces, assemblyOf(ctx, state));
-  const l = loadsAndEnergy(ctx, state.cfm50, envelope);
-  return { cfm50: state.cfm50, envelope, infiltration: l.infiltration, designLoad: l.designLoad, energy: l.energy };
+/**
+ * The envelope of the house as the upgrades change it, one surface result per surface. An upgrade
+ * changes a few surfaces (a new surface object, or an assembly key now meaning another definition);
+ * only those are computed again, and the totals are summed afresh over all results in surface order,
+ * so every figure is exactly what a whole-house evaluation gives.
+ */
+class Envelope {
+  /** The surface objects and assembly definitions the results were computed for. */
+  private surfaces: SurfaceDef[];
+  private defs: AssemblyDef[];
+  readonly results: SurfaceResult[];
+  readonly assemblies: AssemblyResult[];
+
+  constructor(state: HouseState) {
+    const n = state.surfaces.length;
+    this.surfaces = state.surfaces;
+    this.defs = new Array(n);
+    this.results = new Array(n);
+    this.assemblies = new Array(n);
+    for (let i = 0; i < n; i++) this.compute(state, i);
+  }
+
+  private compute(state: HouseState, i: number) {
+    const s = state.surfaces[i];
+    const def = assemblyDef(state, s.assemblyKey, "surfaces");
+    const a = computeAssembly(def, "surfaces");
+    this.defs[i] = def;
+    this.assemblies[i] = a;
+    this.results[i] = surfaceResult(s, a, "surfaces", i);
+  }
+
+  /** Bring the results up to `next`, the state an upgrade left from the state they were computed for. */
+  update(prev: HouseState, next: HouseState) {
+    const n = next.surfaces.length;
+    if (n !== this.surfaces.length || next.assemblies.size < prev.assemblies.size) {
+      // not a change an upgrade makes: start over
+      this.results.length = this.defs.length = this.assemblies.length = 0;
+      this.surfaces = next.surfaces;
+      for (let i = 0; i < n; i++) this.compute(next, i);
+      return;
+    }
+    let keys: Set<string> | null = null;
+    if (next.assemblies !== prev.assemblies) {
+      const changed = new Set<string>();
+      next.assemblies.forEach((d, k) => { if (prev.assemblies.get(k) !== d) changed.add(k); });
+      if (changed.size > 0) keys = changed;
+    }
+    if (next.surfaces === this.surfaces && keys === null) return;
+    for (let i = 0; i < n; i++) {
+      const s = next.surfaces[i];
+      if (s !== this.surfaces[i] || (keys !== null && keys.has(s.assemblyKey))) this.compute(next, i);
+    }
+    this.surfaces = next.surfaces;
+  }
+
+  totals(): { ua: UAByComponent; totalUA: number } {
+    const ua = sumByComponent(this.results);
+    return { ua, totalUA: ua.walls + ua.ceilings + ua.floors + ua.windows + ua.doors };
+  }
 }
 
-/** Totals only: for the houses between upgrades, whose per-surface figures no report shows. */
-function evaluateTotals(ctx: Ctx, state: HouseState) {
-  const envelope = envelopeTotals(state.surfaces, assemblyOf(ctx, state));
-  const l = loadsAndEnergy(ctx, state.cfm50, envelope);
-  return { cfm50: state.cfm50, envelope, infiltration: l.infiltration, designLoad: l.designLoad, energy: l.energy };
+function evaluation<E extends { ua: UAByComponent; totalUA: number }>(ctx: Ctx, cfm50: number, envelope: E) {
+  const l = loadsAndEnergy(ctx, cfm50, envelope);
+  return { cfm50, envelope, infiltration: l.infiltration, designLoad: l.designLoad, energy: l.energy };
 }
 
 function loadsAndEnergy(ctx: Ctx, cfm50: number, envelope: { ua: UAByComponent; totalUA: number }) {
   const { h } = ctx;
-  const inf = h.infiltration;
-  const infiltration = computeInfiltration(cfm50, {
-    method: inf.method, nFactorZone: inf.nFactorZone, shielding: inf.shielding, nFactorOverride: inf.nFactorOverride,
-    shelterClass: inf.shelterClass, flowExponent: inf.flowExponent, seasonalDeltaTF: inf.seasonalDeltaTF,
-    seasonalWindMph: inf.seasonalWindMph, designWindMph: inf.designWindMph,
-    volumeFt3: h.volumeFt3, stories: h.stories, designDeltaTF: h.indoorTempF - ctx.designF,
-  });
+  // the same leakage gives the same infiltration figures: computed once per distinct CFM50 in a row
+  const infiltration = ctx.lastInfiltration !== null && ctx.lastInfiltration.cfm50 === cfm50 ? ctx.lastInfiltration : (ctx.lastInfiltration = computeInfiltration(cfm50, ctx.inf));
   const designLoad = designHeatLoad(envelope, infiltration.design.cfm, h.indoorTempF, ctx.designF);
   const energy = annualHeating({
     envelopeUA: envelope.totalUA, infiltrationCfm: infiltration.seasonal.cfm, hdd65: ctx.hdd65, correctionFactor: h.correctionFactor,
@@ -59,7 +104,7 @@ function loadsAndEnergy(ctx: Ctx, cfm50: number, envelope: { ua: UAByComponent; 
   });
   return { infiltration, designLoad, energy };
 }
-export type HouseEvaluation = ReturnType<typeof evaluate>;
+export type HouseEvaluation = { cfm50: number; envelope: EnvelopeResult; infiltration: InfiltrationResult; designLoad: DesignLoad; energy: AnnualHeating };
 
 function savings(before: AnnualHeating, after: AnnualHeating) {
   return { fuelUnits: before.fuelUnits - after.fuelUnits, fuelUnit: before.fuelUnit, usd: before.costUSD - after.costUSD, co2Lb: before.co2Lb - after.co2Lb, mmbtu: before.mmbtu - after.mmbtu };
@@ -74,17 +119,30 @@ export function analyzeHouse(input: HouseInput | unknown) {
 export function analyzePrepared(prepared: Prepared) {
   const { input: h, assemblies } = prepared;
   const climate = resolveClimate(h.climate, h.designPercentile);
-  const ctx: Ctx = { h, hdd65: climate.hdd65, designF: climate.heatingDesignTempF, cache: new WeakMap() };
+  const inf = h.infiltration;
+  const ctx: Ctx = {
+    h, hdd65: climate.hdd65, designF: climate.heatingDesignTempF, lastInfiltration: null,
+    inf: {
+      method: inf.method, nFactorZone: inf.nFactorZone, shielding: inf.shielding, nFactorOverride: inf.nFactorOverride,
+      shelterClass: inf.shelterClass, flowExponent: inf.flowExponent, seasonalDeltaTF: inf.seasonalDeltaTF,
+      seasonalWindMph: inf.seasonalWindMph, designWindMph: inf.designWindMph,
+      volumeFt3: h.volumeFt3, stories: h.stories, designDeltaTF: h.indoorTempF - climate.heatingDesignTempF,
+    },
+  };
   const base: HouseState = { assemblies, surfaces: h.surfaces, cfm50: h.blowerDoor.cfm50TestIn };
-  const baseline = evaluate(ctx, base);
+  const env = new Envelope(base);
+  const baseAssemblies = env.assemblies.slice();
+  const baseline: HouseEvaluation = evaluation(ctx, base.cfm50, { surfaces: env.results.slice(), ...env.totals() });
   const { discountRate: d, fuelEscalationRate: e } = h.economics;
   let state = base;
-  let prev: ReturnType<typeof evaluateTotals> = baseline;
+  let prev: { cfm50: number; envelope: { ua: UAByComponent; totalUA: number }; designLoad: DesignLoad; energy: AnnualHeating } = baseline;
   let final = baseline;
+  const n = h.upgrades.length;
   const upgrades = h.upgrades.map((u, i) => {
     const applied = applyUpgrade(state, u, `upgrades.${i}`, u.type === "air-sealing" ? h.blowerDoor.cfm50TestOut : undefined);
-    const last = i === h.upgrades.length - 1;
-    const after = last ? (final = evaluate(ctx, applied.state)) : evaluateTotals(ctx, applied.state);
+    env.update(state, applied.state);
+    const totals = env.totals();
+    const after = i === n - 1 ? (final = evaluation(ctx, applied.state.cfm50, { surfaces: env.results, ua: totals.ua, totalUA: totals.totalUA })) : evaluation(ctx, applied.state.cfm50, totals);
     const s = savings(prev.energy, after.energy);
     const lifeYears = u.lifeYears ?? MEASURE_LIFE_YEARS[u.type];
     const result = {
@@ -106,22 +164,32 @@ export function analyzePrepared(prepared: Prepared) {
 
   // Dense-pack quantities for every wall a dense-pack upgrade fills (on the house as it was found).
   const dpIds = new Set<string>();
-  upgrades.forEach((u) => { if (u.type === "dense-pack-walls") for (const id of (u.details.surfaceIds as string[])) dpIds.add(id); });
+  for (const u of upgrades) if (u.type === "dense-pack-walls") for (const id of (u.details.surfaceIds as string[])) dpIds.add(id);
   const storeyH = h.storeyHeightFt ?? DEFAULT_STOREY_HEIGHT_FT;
   const densePack: DensePackEstimate[] = [];
-  h.surfaces.forEach((s, i) => {
-    if (!dpIds.has(s.id)) return;
-    const a = assemblyOf(ctx, base)(s.assemblyKey, `surfaces.${i}.assemblyKey`);
-    const framedSpec = base.assemblies.get(s.assemblyKey)!.layers.find((l) => "framed" in l);
-    const sr = baseline.envelope.surfaces[i];
-    densePack.push(densePackEstimate({
-      surfaceId: s.id, surfaceName: s.name, grossAreaFt2: s.grossAreaFt2, netAreaFt2: sr.netAreaFt2,
-      heightFt: s.heightFt ?? storeyH * h.stories, framingFraction: a.framing!.framingFraction,
-      cavityDepthIn: framedSpec && "framed" in framedSpec ? memberDepthIn(framedSpec.framed)! : a.framing!.depthIn,
-      spacingIn: a.framing!.spacingIn, densityLbFt3: h.densePack.densityLbFt3, bagWeightLb: h.densePack.bagWeightLb,
-      storeyHeightFt: storeyH, blockedBayFraction: s.blockedBayFraction ?? 0,
-    }));
-  });
+  if (dpIds.size > 0) {
+    const framedDepth = new Map<AssemblyDef, { framed: boolean; depthIn: number | undefined }>();
+    for (let i = 0; i < h.surfaces.length; i++) {
+      const s = h.surfaces[i];
+      if (!dpIds.has(s.id)) continue;
+      const a = baseAssemblies[i];
+      const def = base.assemblies.get(s.assemblyKey)!;
+      let fd = framedDepth.get(def);
+      if (!fd) {
+        const framedSpec = def.layers.find((l) => "framed" in l);
+        fd = framedSpec && "framed" in framedSpec ? { framed: true, depthIn: memberDepthIn(framedSpec.framed)! } : { framed: false, depthIn: undefined };
+        framedDepth.set(def, fd);
+      }
+      const sr = baseline.envelope.surfaces[i];
+      densePack.push(densePackEstimate({
+        surfaceId: s.id, surfaceName: s.name, grossAreaFt2: s.grossAreaFt2, netAreaFt2: sr.netAreaFt2,
+        heightFt: s.heightFt ?? storeyH * h.stories, framingFraction: a.framing!.framingFraction,
+        cavityDepthIn: fd.framed ? fd.depthIn! : a.framing!.depthIn,
+        spacingIn: a.framing!.spacingIn, densityLbFt3: h.densePack.densityLbFt3, bagWeightLb: h.densePack.bagWeightLb,
+        storeyHeightFt: storeyH, blockedBayFraction: s.blockedBayFraction ?? 0,
+      }));
+    }
+  }
   const crewCheck = h.crewLog.map((c, i) => {
     const est = densePack.find((x) => x.surfaceId === c.surfaceId);
     if (!est) throw CalcInputError.at(`crewLog.${i}.surfaceId`, `surface "${c.surfaceId}" is not in a dense-pack upgrade`);
@@ -129,10 +197,22 @@ export function analyzePrepared(prepared: Prepared) {
   });
 
   const dew = indoorDewPointF(h.indoorTempF, h.indoorRH);
-  const screen = (st: HouseState) => {
+  // one screen per assembly result, shared by the before and after lists when an assembly is in both
+  const screens = new Map<AssemblyResult, MoistureScreen>();
+  const screenOf = moistureScreener(h.indoorTempF, climate.heatingDesignTempF, h.indoorRH, dew);
+  const screen = (st: HouseState, results: AssemblyResult[]) => {
     const seen = new Set<string>();
-    return st.surfaces.filter((s) => s.kind !== "floor" && !seen.has(s.assemblyKey) && seen.add(s.assemblyKey))
-      .map((s) => moistureScreen(assemblyOf(ctx, st)(s.assemblyKey, "surfaces"), h.indoorTempF, climate.heatingDesignTempF, h.indoorRH, dew));
+    const out: MoistureScreen[] = [];
+    for (let i = 0; i < st.surfaces.length; i++) {
+      const s = st.surfaces[i];
+      if (s.kind === "floor" || seen.has(s.assemblyKey)) continue;
+      seen.add(s.assemblyKey);
+      const a = results[i];
+      let m = screens.get(a);
+      if (!m) { m = screenOf(a); screens.set(a, m); }
+      out.push(m);
+    }
+    return out;
   };
   const ventHeight = h.ventilationHeightFt ?? storeyH * h.stories;
   const vent = (cfm50: number) => ventilation62_2({ floorAreaFt2: h.floorAreaFt2, bedrooms: h.bedrooms, cfm50, wsf: h.ventilation.wsf, heightFt: ventHeight, balanced: h.ventilation.balanced });
@@ -143,7 +223,7 @@ export function analyzePrepared(prepared: Prepared) {
   });
   return {
     input: h, climate, baseline, upgrades, package: packageResult, final, densePack, crewCheck,
-    moisture: { before: screen(base), after: screen(state) },
+    moisture: { before: screen(base, baseAssemblies), after: screen(state, env.assemblies) },
     ventilation: { before: vent(baseline.cfm50), after: vent(final.cfm50) },
     cautions, warnings: softWarningsParsed(h), methods: METHOD_NOTES,
   };

@@ -29,25 +29,33 @@ export interface SurfaceResult {
 export interface UAByComponent { walls: number; ceilings: number; floors: number; windows: number; doors: number }
 export interface EnvelopeResult { surfaces: SurfaceResult[]; ua: UAByComponent; totalUA: number }
 
-function openingResult(o: OpeningDef, bf: number, surfacePath: string, j: number): OpeningResult {
+/** `prefix.i`, or `prefix` alone when i < 0: built only for an error message. */
+const at = (prefix: string, i: number) => (i < 0 ? prefix : `${prefix}.${i}`);
+
+function openingResult(o: OpeningDef, bf: number, prefix: string, i: number, j: number): OpeningResult {
   const area = o.areaFt2 * (o.count ?? 1);
   if (o.uFactorIP !== undefined) return { kind: o.kind, label: o.label ?? o.kind, areaFt2: area, uFactorIP: o.uFactorIP, uFactorSource: "entered by the auditor", ua: o.uFactorIP * area * bf };
-  if (o.productKey === undefined) throw CalcInputError.at(`${surfacePath}.openings.${j}`, "give either productKey or uFactorIP");
+  if (o.productKey === undefined) throw CalcInputError.at(`${at(prefix, i)}.openings.${j}`, "give either productKey or uFactorIP");
   const p = getWindowOrDoor(o.productKey);
-  if (!p) throw CalcInputError.at(`${surfacePath}.openings.${j}.productKey`, `unknown window or door "${o.productKey}"`);
+  if (!p) throw CalcInputError.at(`${at(prefix, i)}.openings.${j}.productKey`, `unknown window or door "${o.productKey}"`);
   return { kind: o.kind, label: o.label ?? p.name, areaFt2: area, uFactorIP: p.uFactorIP, uFactorSource: p.source, ua: p.uFactorIP * area * bf };
 }
 
 export function computeSurface(s: SurfaceDef, a: AssemblyResult, path: string): SurfaceResult {
+  return surfaceResult(s, a, path, -1);
+}
+
+/** computeSurface for the surface at `prefix.i`, the path built only for an error (a string per surface costs). */
+export function surfaceResult(s: SurfaceDef, a: AssemblyResult, prefix: string, i: number): SurfaceResult {
   const bf = s.bufferFactor ?? 1;
   const defs = s.openings ?? [];
   const openings: OpeningResult[] = new Array(defs.length);
-  for (let j = 0; j < defs.length; j++) openings[j] = openingResult(defs[j], bf, path, j);
+  for (let j = 0; j < defs.length; j++) openings[j] = openingResult(defs[j], bf, prefix, i, j);
   let openingsArea = 0;
   let openingsUA = 0;
   for (const o of openings) { openingsArea += o.areaFt2; openingsUA += o.ua; }
   const net = s.grossAreaFt2 - openingsArea;
-  if (net < 0) throw CalcInputError.at(`${path}.openings`, `openings (${openingsArea.toFixed(1)} ft²) exceed the gross area of ${s.grossAreaFt2} ft²`);
+  if (net < 0) throw CalcInputError.at(`${at(prefix, i)}.openings`, `openings (${openingsArea.toFixed(1)} ft²) exceed the gross area of ${s.grossAreaFt2} ft²`);
   const opaqueUA = a.uFactorIP * net * bf;
   return {
     id: s.id, name: s.name, kind: s.kind, orientation: s.orientation, assemblyKey: s.assemblyKey,
@@ -62,41 +70,20 @@ export function computeEnvelope(surfaces: SurfaceDef[], assembly: AssemblyLookup
   const results: SurfaceResult[] = new Array(surfaces.length);
   for (let i = 0; i < surfaces.length; i++) {
     const s = surfaces[i];
-    results[i] = computeSurface(s, assembly(s.assemblyKey, path), `${path}.${i}`);
+    results[i] = surfaceResult(s, assembly(s.assemblyKey, path), path, i);
   }
   const ua = sumByComponent(results);
   return { surfaces: results, ua, totalUA: ua.walls + ua.ceilings + ua.floors + ua.windows + ua.doors };
 }
 
-function sumByComponent(results: SurfaceResult[]): UAByComponent {
+/** UA by component over per-surface results, summed in surface order. */
+export function sumByComponent(results: SurfaceResult[]): UAByComponent {
   let walls = 0, ceilings = 0, floors = 0, windows = 0, doors = 0;
   for (const r of results) {
     if (r.kind === "wall") walls += r.opaqueUA; else if (r.kind === "ceiling") ceilings += r.opaqueUA; else floors += r.opaqueUA;
     for (const o of r.openings) if (o.kind === "window") windows += o.ua; else doors += o.ua;
   }
   return { walls, ceilings, floors, windows, doors };
-}
-
-/**
- * The same UA totals without per-surface results, for the intermediate houses of an
- * upgrade sequence (inputs already validated, so no error paths are built here).
- */
-export function envelopeTotals(surfaces: SurfaceDef[], assembly: AssemblyLookup): Pick<EnvelopeResult, "ua" | "totalUA"> {
-  let walls = 0, ceilings = 0, floors = 0, windows = 0, doors = 0;
-  for (const s of surfaces) {
-    const bf = s.bufferFactor ?? 1;
-    let openArea = 0;
-    if (s.openings) for (const o of s.openings) {
-      const area = o.areaFt2 * (o.count ?? 1);
-      openArea += area;
-      const u = o.uFactorIP ?? getWindowOrDoor(o.productKey!)!.uFactorIP;
-      if (o.kind === "window") windows += u * area * bf; else doors += u * area * bf;
-    }
-    const opaque = assembly(s.assemblyKey, "surfaces").uFactorIP * (s.grossAreaFt2 - openArea) * bf;
-    if (s.kind === "wall") walls += opaque; else if (s.kind === "ceiling") ceilings += opaque; else floors += opaque;
-  }
-  const ua = { walls, ceilings, floors, windows, doors };
-  return { ua, totalUA: walls + ceilings + floors + windows + doors };
 }
 
 export interface DesignLoad {

@@ -17,8 +17,17 @@ function framedOf(def: AssemblyDef): FramedLayerSpec | undefined {
   return l && "framed" in l ? l.framed : undefined;
 }
 
+// A pure function of the definition (treated as immutable, like computeAssembly's results): memoised.
+const nominalR = new WeakMap<AssemblyDef, number>();
+
 /** Nominal insulation R of an assembly: insulation layers plus the cavity fill (by its filled share). */
 export function nominalInsulationR(def: AssemblyDef): number {
+  let r = nominalR.get(def);
+  if (r === undefined) { r = nominalInsulationRUncached(def); nominalR.set(def, r); }
+  return r;
+}
+
+function nominalInsulationRUncached(def: AssemblyDef): number {
   let r = 0;
   for (const l of def.layers) {
     if ("framed" in l) {
@@ -37,20 +46,24 @@ export function nominalInsulationR(def: AssemblyDef): number {
   return r;
 }
 
-function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | string[], kind: SurfaceDef["kind"] | null, path: string): Set<number> {
-  const out = new Set<number>();
+/** Indices of the chosen surfaces, each once, in the order first named (a list is checked id by id). */
+function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | string[], kind: SurfaceDef["kind"] | null, path: string): number[] {
+  const surfaces = state.surfaces;
+  const out: number[] = [];
   if (typeof ids === "string") {
-    state.surfaces.forEach((s, i) => { if (kind === null || s.kind === kind) out.add(i); });
+    for (let i = 0; i < surfaces.length; i++) if (kind === null || surfaces[i].kind === kind) out.push(i);
     return out;
   }
   const index = new Map<string, number>();
-  state.surfaces.forEach((s, i) => index.set(s.id, i));
-  ids.forEach((id, j) => {
+  for (let i = 0; i < surfaces.length; i++) index.set(surfaces[i].id, i);
+  const taken = new Uint8Array(surfaces.length);
+  for (let j = 0; j < ids.length; j++) {
+    const id = ids[j];
     const i = index.get(id) ?? -1;
     if (i < 0) throw CalcInputError.at(`${path}.${j}`, `no surface with id "${id}"`);
-    if (kind !== null && state.surfaces[i].kind !== kind) throw CalcInputError.at(`${path}.${j}`, `surface "${id}" is a ${state.surfaces[i].kind}, not a ${kind}`);
-    out.add(i);
-  });
+    if (kind !== null && surfaces[i].kind !== kind) throw CalcInputError.at(`${path}.${j}`, `surface "${id}" is a ${surfaces[i].kind}, not a ${kind}`);
+    if (taken[i] === 0) { taken[i] = 1; out.push(i); }
+  }
   return out;
 }
 
@@ -75,13 +88,19 @@ function surfaceWith(s: SurfaceDef, assemblyKey: string, openings: OpeningDef[] 
 }
 
 /** Re-point chosen surfaces to a derived assembly made by `derive` (one per source assembly). */
-function reassign(state: HouseState, idx: Set<number>, suffix: string, derive: (def: AssemblyDef) => AssemblyDef): HouseState {
+function reassign(state: HouseState, idx: number[], suffix: string, derive: (def: AssemblyDef) => AssemblyDef): HouseState {
   const assemblies = new Map(state.assemblies);
   const surfaces = state.surfaces.slice();
+  let lastKey: string | undefined;
+  let d: AssemblyDef | undefined;
   for (const i of idx) {
     const s = surfaces[i];
-    const d = variant(state.assemblies.get(s.assemblyKey)!, suffix, derive);
-    assemblies.set(d.key, d);
+    if (s.assemblyKey !== lastKey || d === undefined) {
+      // surfaces side by side mostly share an assembly: one lookup per run of the same key
+      lastKey = s.assemblyKey;
+      d = variant(state.assemblies.get(s.assemblyKey)!, suffix, derive);
+      assemblies.set(d.key, d);
+    }
     surfaces[i] = surfaceWith(s, d.key, s.openings);
   }
   return { assemblies, surfaces, cfm50: state.cfm50 };
@@ -95,12 +114,12 @@ export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, t
       ...def, name: `${def.name}, dense-packed`,
       layers: def.layers.map((l) => ("framed" in l ? { framed: { ...l.framed, cavityFill: DENSE_PACK, fillFraction: 1, fillRValueIP: u.rPerInchIP !== undefined ? u.rPerInchIP * (memberDepthIn(l.framed) ?? 0) : undefined } } : l)),
     }));
-    return { state: next, details: { surfaceIds: [...idx].map((i) => state.surfaces[i].id) }, description: `Dense-pack cellulose in ${idx.size} wall surface(s)` };
+    return { state: next, details: { surfaceIds: idx.map((i) => state.surfaces[i].id) }, description: `Dense-pack cellulose in ${idx.length} wall surface(s)` };
   }
   if (u.type === "attic-insulation") {
     const idx = chosen(state, u.surfaceIds, "ceiling", `${path}.surfaceIds`);
     const rPerIn = getMaterial(ATTIC_FILL)!.rPerInchIP!;
-    const added = [...idx].map((i) => {
+    const added = idx.map((i) => {
       const existing = nominalInsulationR(state.assemblies.get(state.surfaces[i].assemblyKey)!);
       const add = Math.max(0, u.targetRIP - existing);
       return { surfaceId: state.surfaces[i].id, existingRIP: existing, addedRIP: add, addedInches: add / rPerIn };

@@ -34,35 +34,40 @@ export function plainMessage(path: string, message: string): string {
 
 export interface Prepared { input: HouseInputParsed; assemblies: Map<string, AssemblyDef> }
 
+const BUILT_IN_MAP = new Map<string, AssemblyDef>(builtInAssemblies.map((a) => [a.key, a]));
+
 function semanticIssues(h: HouseInputParsed): { issues: InputIssue[]; assemblies: Map<string, AssemblyDef> } {
   const issues: InputIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
-  const assemblies = new Map<string, AssemblyDef>(builtInAssemblies.map((a) => [a.key, a]));
+  const assemblies = new Map<string, AssemblyDef>(BUILT_IN_MAP);
   h.assemblies.forEach((a, i) => {
     if (assemblies.has(a.key)) return add(`assemblies.${i}.key`, `"${a.key}" is already the key of ${BUILT_IN_KEYS.has(a.key) ? "a built-in assembly" : "another assembly"}`);
     try { computeAssembly(a, `assemblies.${i}`); assemblies.set(a.key, a); } catch (e) { if (e instanceof CalcInputError) issues.push(...e.issues); else throw e; }
   });
+  // Surfaces and openings are most of a house: plain loops, and a path string only for an issue.
   const ids = new Set<string>();
-  h.surfaces.forEach((s, i) => {
-    const p = `surfaces.${i}`;
-    if (ids.has(s.id)) add(`${p}.id`, `"${s.id}" is used by another surface`);
+  const surfaces = h.surfaces;
+  for (let i = 0; i < surfaces.length; i++) {
+    const s = surfaces[i];
+    if (ids.has(s.id)) add(`surfaces.${i}.id`, `"${s.id}" is used by another surface`);
     ids.add(s.id);
     const a = assemblies.get(s.assemblyKey);
-    if (!a) add(`${p}.assemblyKey`, `no assembly "${s.assemblyKey}"`);
-    else if (a.kind !== s.kind) add(`${p}.assemblyKey`, `"${s.assemblyKey}" is a ${a.kind} assembly, not a ${s.kind}`);
+    if (!a) add(`surfaces.${i}.assemblyKey`, `no assembly "${s.assemblyKey}"`);
+    else if (a.kind !== s.kind) add(`surfaces.${i}.assemblyKey`, `"${s.assemblyKey}" is a ${a.kind} assembly, not a ${s.kind}`);
     let openArea = 0;
-    s.openings.forEach((o, j) => {
+    const openings = s.openings;
+    for (let j = 0; j < openings.length; j++) {
+      const o = openings[j];
       openArea += o.areaFt2 * (o.count ?? 1);
-      const op = `${p}.openings.${j}`;
-      if ((o.productKey === undefined) === (o.uFactorIP === undefined)) return add(op, "give either productKey or uFactorIP, not both or neither");
+      if ((o.productKey === undefined) === (o.uFactorIP === undefined)) { add(`surfaces.${i}.openings.${j}`, "give either productKey or uFactorIP, not both or neither"); continue; }
       if (o.productKey !== undefined) {
         const w = getWindowOrDoor(o.productKey);
-        if (!w) add(`${op}.productKey`, `unknown window or door "${o.productKey}"`);
-        else if (w.kind !== o.kind) add(`${op}.productKey`, `"${o.productKey}" is a ${w.kind}, not a ${o.kind}`);
+        if (!w) add(`surfaces.${i}.openings.${j}.productKey`, `unknown window or door "${o.productKey}"`);
+        else if (w.kind !== o.kind) add(`surfaces.${i}.openings.${j}.productKey`, `"${o.productKey}" is a ${w.kind}, not a ${o.kind}`);
       }
-    });
-    if (openArea > s.grossAreaFt2) add(`${p}.openings`, `openings total ${openArea} ft², more than the gross area of ${s.grossAreaFt2} ft²`);
-  });
+    }
+    if (openArea > s.grossAreaFt2) add(`surfaces.${i}.openings`, `openings total ${openArea} ft², more than the gross area of ${s.grossAreaFt2} ft²`);
+  }
   h.upgrades.forEach((u, i) => {
     if (u.type === "air-sealing" && u.targetCfm50 >= h.blowerDoor.cfm50TestIn) add(`upgrades.${i}.targetCfm50`, `must be below the test-in ${h.blowerDoor.cfm50TestIn} CFM50`);
     if ("surfaceIds" in u && Array.isArray(u.surfaceIds)) u.surfaceIds.forEach((id, j) => { if (!ids.has(id)) add(`upgrades.${i}.surfaceIds.${j}`, `no surface with id "${id}"`); });
