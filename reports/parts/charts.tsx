@@ -1,7 +1,7 @@
 // Vector charts for the PDF, drawn with React-PDF's own Svg primitives (recharts needs a DOM).
 // Each chart takes plain numbers and draws its labels in the report's body face.
 import type { ComponentType, ReactNode } from "react";
-import { G, Line, Polyline, Rect, Svg, Text, View } from "@react-pdf/renderer";
+import { Line, Path, Polyline, Rect, Svg, Text, View } from "@react-pdf/renderer";
 import { BODY } from "./fonts";
 import { AFTER, BEFORE, colors } from "./theme";
 import { pdfText } from "./text";
@@ -24,6 +24,9 @@ export function niceStep(max: number, count = 5): number {
   const r = raw / mag;
   return (r <= 1 ? 1 : r <= 2 ? 2 : r <= 2.5 ? 2.5 : r <= 5 ? 5 : 10) * mag;
 }
+/** A rectangle as a closed subpath, so several same-coloured ones draw as one path. */
+const rectPath = (x: number, y: number, w: number, h: number) => `M${x} ${y}H${x + w}V${y + h}H${x}Z`;
+
 const ticks = (max: number, count = 5) => {
   const step = niceStep(max, count);
   const top = Math.ceil(max / step) * step;
@@ -70,25 +73,23 @@ export function PairedBars({ rows, width, format, labelWidth = 74 }: { rows: Pai
   const scaleMax = axis[axis.length - 1];
   const x = (v: number) => labelWidth + (Math.max(0, v) / scaleMax) * plotW;
   const height = rows.length * rowH + 16;
+  // Same-styled shapes share one path (gridlines, then each series' bars), drawn in the order
+  // the chart layers them: grid under bars, the value axis over them.
+  const grid = axis.map((t) => `M${x(t)} 0V${height - 14}`).join("");
+  const bars = (v: (r: PairRow) => number, dy: number) => rows.map((r, i) => rectPath(labelWidth, i * rowH + 4 + dy, Math.max(0.5, x(v(r)) - labelWidth), bar)).join("");
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
-      {axis.map((t) => (
-        <G key={t}>
-          <Line x1={x(t)} y1={0} x2={x(t)} y2={height - 14} stroke={colors.line} strokeWidth={0.5} />
-          <Label x={x(t)} y={height - 4} textAnchor="middle" size={7}>{format(t)}</Label>
-        </G>
-      ))}
+      <Path d={grid} stroke={colors.line} strokeWidth={0.5} />
+      {axis.map((t) => <Label key={t} x={x(t)} y={height - 4} textAnchor="middle" size={7}>{format(t)}</Label>)}
+      <Path d={bars((r) => r.before, 0)} fill={BEFORE} />
+      <Path d={bars((r) => r.after, bar + gap)} fill={AFTER} />
       {rows.map((r, i) => {
         const y0 = i * rowH + 4;
-        return (
-          <G key={r.label}>
-            <Label x={labelWidth - 6} y={y0 + bar + 3} textAnchor="end" size={8.5} fill={colors.charcoal}>{r.label}</Label>
-            <Rect x={labelWidth} y={y0} width={Math.max(0.5, x(r.before) - labelWidth)} height={bar} fill={BEFORE} />
-            <Label x={x(r.before) + 3} y={y0 + bar - 1.5} size={7.5}>{format(r.before)}</Label>
-            <Rect x={labelWidth} y={y0 + bar + gap} width={Math.max(0.5, x(r.after) - labelWidth)} height={bar} fill={AFTER} />
-            <Label x={x(r.after) + 3} y={y0 + 2 * bar + gap - 1.5} size={7.5} fill={colors.spruce800} weight={600}>{format(r.after)}</Label>
-          </G>
-        );
+        return [
+          <Label key={`${r.label}-l`} x={labelWidth - 6} y={y0 + bar + 3} textAnchor="end" size={8.5} fill={colors.charcoal}>{r.label}</Label>,
+          <Label key={`${r.label}-b`} x={x(r.before) + 3} y={y0 + bar - 1.5} size={7.5}>{format(r.before)}</Label>,
+          <Label key={`${r.label}-a`} x={x(r.after) + 3} y={y0 + 2 * bar + gap - 1.5} size={7.5} fill={colors.spruce800} weight={600}>{format(r.after)}</Label>,
+        ];
       })}
       <Line x1={labelWidth} y1={0} x2={labelWidth} y2={height - 14} stroke={colors.charcoal} strokeWidth={0.75} />
     </Svg>
@@ -106,25 +107,28 @@ export function Columns({ columns, width, height = 150, format }: { columns: Col
   const slot = width / columns.length;
   const barW = Math.min(46, slot * 0.6);
   const fill = (t: Column["tone"]) => (t === "before" ? BEFORE : t === "after" ? AFTER : colors.spruce500);
+  const geometry = columns.map((c, i) => {
+    const h = (Math.max(0, c.value) / max) * plotH;
+    const cx = slot * i + slot / 2;
+    const words = c.label.split(" ");
+    const half = Math.ceil(words.length / 2);
+    const lines = c.label.length > 14 && words.length > 1 ? [words.slice(0, half).join(" "), words.slice(half).join(" ")] : [c.label];
+    return { c, h, cx, lines };
+  });
+  // One path per fill: columns never overlap, so this draws what a rect per column would.
+  const tones = [...new Set(columns.map((c) => c.tone))];
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
       <Line x1={0} y1={top + plotH} x2={width} y2={top + plotH} stroke={colors.charcoal} strokeWidth={0.75} />
-      {columns.map((c, i) => {
-        const h = (Math.max(0, c.value) / max) * plotH;
-        const cx = slot * i + slot / 2;
-        const words = c.label.split(" ");
-        const half = Math.ceil(words.length / 2);
-        const lines = c.label.length > 14 && words.length > 1 ? [words.slice(0, half).join(" "), words.slice(half).join(" ")] : [c.label];
-        return (
-          <G key={i}>
-            <Rect x={cx - barW / 2} y={top + plotH - h} width={barW} height={Math.max(0.5, h)} fill={fill(c.tone)} />
-            <Label x={cx} y={top + plotH - h - 4} textAnchor="middle" size={8.5} weight={700} fill={c.tone === "before" ? colors.ember700 : colors.spruce800}>{format(c.value)}</Label>
-            {lines.map((l, li) => (
-              <Label key={li} x={cx} y={top + plotH + 11 + li * 9} textAnchor="middle" size={7.5} fill={colors.charcoal}>{l}</Label>
-            ))}
-          </G>
-        );
-      })}
+      {tones.map((tone) => (
+        <Path key={tone} d={geometry.filter((g) => g.c.tone === tone).map((g) => rectPath(g.cx - barW / 2, top + plotH - g.h, barW, Math.max(0.5, g.h))).join("")} fill={fill(tone)} />
+      ))}
+      {geometry.map(({ c, h, cx, lines }, i) => [
+        <Label key={`${i}-v`} x={cx} y={top + plotH - h - 4} textAnchor="middle" size={8.5} weight={700} fill={c.tone === "before" ? colors.ember700 : colors.spruce800}>{format(c.value)}</Label>,
+        ...lines.map((l, li) => (
+          <Label key={`${i}-${li}`} x={cx} y={top + plotH + 11 + li * 9} textAnchor="middle" size={7.5} fill={colors.charcoal}>{l}</Label>
+        )),
+      ])}
     </Svg>
   );
 }
@@ -148,12 +152,8 @@ export function CumulativeChart({ points, cost, width, height = 170, format }: {
   const cross = points.findIndex((v) => v >= cost && cost > 0);
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
-      {axis.map((t) => (
-        <G key={t}>
-          <Line x1={left} y1={y(t)} x2={left + plotW} y2={y(t)} stroke={colors.line} strokeWidth={0.5} />
-          <Label x={left - 4} y={y(t) + 2.5} textAnchor="end" size={7}>{format(t)}</Label>
-        </G>
-      ))}
+      <Path d={axis.map((t) => `M${left} ${y(t)}H${left + plotW}`).join("")} stroke={colors.line} strokeWidth={0.5} />
+      {axis.map((t) => <Label key={`y${t}`} x={left - 4} y={y(t) + 2.5} textAnchor="end" size={7}>{format(t)}</Label>)}
       {yearTicks.map((t) => (
         <Label key={t} x={x(t)} y={top + plotH + 10} textAnchor="middle" size={7}>{String(t)}</Label>
       ))}
@@ -161,12 +161,8 @@ export function CumulativeChart({ points, cost, width, height = 170, format }: {
       <Line x1={left} y1={top + plotH} x2={left + plotW} y2={top + plotH} stroke={colors.charcoal} strokeWidth={0.75} />
       <Line x1={left} y1={y(cost)} x2={left + plotW} y2={y(cost)} stroke={BEFORE} strokeWidth={1.5} strokeDasharray="4 3" />
       <Polyline points={points.map((v, i) => `${x(i)},${y(v)}`).join(" ")} stroke={AFTER} strokeWidth={2} fill="none" />
-      {cross > 0 ? (
-        <G>
-          <Line x1={x(cross)} y1={y(cost)} x2={x(cross)} y2={top + plotH} stroke={colors.muted} strokeWidth={0.5} strokeDasharray="2 2" />
-          <Rect x={x(cross) - 2.5} y={y(points[cross]) - 2.5} width={5} height={5} fill={colors.spruce900} />
-        </G>
-      ) : null}
+      {cross > 0 ? <Line x1={x(cross)} y1={y(cost)} x2={x(cross)} y2={top + plotH} stroke={colors.muted} strokeWidth={0.5} strokeDasharray="2 2" /> : null}
+      {cross > 0 ? <Rect x={x(cross) - 2.5} y={y(points[cross]) - 2.5} width={5} height={5} fill={colors.spruce900} /> : null}
     </Svg>
   );
 }
