@@ -2,6 +2,7 @@
 // imports route modules in a checkout that has no data/ folder yet.
 import { createClient, type Client, type InStatement, type Transaction } from "@libsql/client";
 import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
+import { cachedReader, withCachedReads } from "./cached-reads";
 import * as schema from "./schema";
 
 export const DEFAULT_DATABASE_URL = "file:./data/warmstead.db";
@@ -34,8 +35,12 @@ export function sqliteFilePath(url: string): string | null {
  * (tests/db/connection.test.ts holds several connections at once and checks each).
  */
 export function createDb(url: string = databaseUrl(), authToken?: string): Db {
-  const raw = createClient({ url, authToken, timeout: 5000 });
-  const client = sqliteFilePath(url) === null ? raw : oneWriterAtATime(gateUntilReady(raw, () => prepareFile(raw, url)));
+  const timeout = 5000;
+  const raw = createClient({ url, authToken, timeout });
+  const file = sqliteFilePath(url);
+  if (file === null) return drizzle({ client: raw, schema }) as Db;
+  const ready = onceUntilDone(() => prepareFile(raw, url));
+  const client = withCachedReads(oneWriterAtATime(gateUntilReady(raw, ready)), cachedReader(file, { timeout }), isRead, ready);
   return drizzle({ client, schema }) as Db;
 }
 
@@ -65,14 +70,18 @@ async function prepareFile(client: Client, url: string): Promise<void> {
 
 const gatedMethods = new Set<PropertyKey>(["execute", "batch", "migrate", "transaction", "executeMultiple"]);
 
-/** Delays the client's first statement until `setup` has run once on it. */
-function gateUntilReady(client: Client, setup: () => Promise<void>): Client {
+/** `setup` run once, shared by every caller; a failure lets the next call try again. */
+function onceUntilDone(setup: () => Promise<void>): () => Promise<void> {
   let ready: Promise<void> | undefined;
-  const whenReady = () =>
+  return () =>
     (ready ??= setup().catch((error: unknown) => {
-      ready = undefined; // let the next call try again
+      ready = undefined;
       throw error;
     }));
+}
+
+/** Delays the client's first statement until `whenReady` has resolved. */
+function gateUntilReady(client: Client, whenReady: () => Promise<void>): Client {
   return new Proxy(client, {
     get(target, property) {
       const value: unknown = Reflect.get(target, property, target);
