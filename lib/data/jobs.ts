@@ -28,9 +28,9 @@ const sortColumns = {
 
 /**
  * How a search is run. Both indexes hold the job number, title, client name, street and town and
- * are kept by triggers (migrations 0001 and 0006):
- * - "words": every word typed is the beginning of a word of the job (`job_words`, reads only the
- *   matching words' entries: "birch 12" finds 12 Birchwood Road);
+ * are kept by triggers (migrations 0001, 0006 and 0008):
+ * - "words": every word typed is the beginning of a word of the job's text (`job_words`, column
+ *   `body`; reads only the matching words' entries: "birch 12" finds 12 Birchwood Road);
  * - "substring": the text anywhere (`job_search`, trigrams), tried when words find nothing;
  * - "like": one or two characters that are not a word, scanned with LIKE.
  */
@@ -40,7 +40,7 @@ type Search = { kind: SearchKind; term?: string };
 function searchPlan(q: string | undefined): Search {
   if (!q) return { kind: "none" };
   const words = q.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
-  if (words.length) return { kind: "words", term: words.map((w) => `"${w}"*`).join(" ") };
+  if (words.length) return { kind: "words", term: `{body} : (${words.map((w) => `"${w}"*`).join(" ")})` };
   return substringPlan(q);
 }
 function substringPlan(q: string): Search {
@@ -53,6 +53,9 @@ function matchesSearch(kind: Exclude<SearchKind, "none">) {
   if (kind === "substring") return sql`${jobs}.rowid in (select rowid from job_search where job_search match ${term})`;
   return sql`${jobs}.rowid in (select rowid from job_search where body like ${term} escape '\\')`;
 }
+
+/** A company's token in the word index's `scope` column (migration 0008). */
+const companyToken = (companyId: string) => `c${companyId.replace(/[^0-9a-z]/gi, "")}`;
 
 /**
  * How a list query is driven. "index": walk the company's jobs in the sort order (best for no
@@ -70,30 +73,41 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
   if (search !== "none") conditions.push(matchesSearch(search));
   const where = and(...conditions);
   const order = query.dir === "asc" ? asc(sortColumns[query.sort]) : desc(sortColumns[query.sort]);
+  const select = db
+    .select({
+      id: jobs.id,
+      number: jobs.number,
+      title: jobs.title,
+      stage: jobs.stage,
+      clientName: clients.name,
+      street: houses.street,
+      city: houses.city,
+      auditorName: users.name,
+      updatedAt: jobs.updatedAt,
+    })
+    .from(jobs)
+    .innerJoin(clients, eq(clients.id, jobs.clientId))
+    .innerJoin(houses, eq(houses.id, jobs.houseId))
+    .leftJoin(users, eq(users.id, jobs.auditorId));
+  const limit = sql.placeholder("limit");
+  const offset = sql.placeholder("offset");
+  // Driven from a search's few matches and sorted by a column of jobs: pick the page's jobs first
+  // and join only those, rather than joining every match and then sorting.
+  const pageFirst = drive === "matches" && query.sort !== "client";
   return {
-    list: db
-      .select({
-        id: jobs.id,
-        number: jobs.number,
-        title: jobs.title,
-        stage: jobs.stage,
-        clientName: clients.name,
-        street: houses.street,
-        city: houses.city,
-        auditorName: users.name,
-        updatedAt: jobs.updatedAt,
-      })
-      .from(jobs)
-      .innerJoin(clients, eq(clients.id, jobs.clientId))
-      .innerJoin(houses, eq(houses.id, jobs.houseId))
-      .leftJoin(users, eq(users.id, jobs.auditorId))
-      .where(where)
-      .orderBy(order, desc(jobs.number))
-      .limit(sql.placeholder("limit"))
-      .offset(sql.placeholder("offset"))
-      .prepare(),
+    list: pageFirst
+      ? select
+          .where(inArray(sql`${jobs}.rowid`, db.select({ rowid: sql`${jobs}.rowid` }).from(jobs).where(where).orderBy(order, desc(jobs.number)).limit(limit).offset(offset)))
+          .orderBy(order, desc(jobs.number))
+          .prepare()
+      : select.where(where).orderBy(order, desc(jobs.number)).limit(limit).offset(offset).prepare(),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
+    // A word search's matches in every company: an upper bound, from the word index alone.
+    wordMatches: db.select({ total: sql<number>`count(*)` }).from(sql`job_words`).where(sql`job_words match ${sql.placeholder("term")}`).prepare(),
+    // A word search's total for roles that see the whole company, from the word index alone: its
+    // `scope` column names each job's company (migration 0008), so no job row is read.
+    companyWordCount: db.select({ total: sql<number>`count(*)` }).from(sql`job_words`).where(sql`job_words match ${sql.placeholder("scopedTerm")}`).prepare(),
     // The company-wide total from job_counts (migration 0007), for roles that see the whole company.
     companyTotal: db
       .select({ total: sql<number>`coalesce(sum(${sql.raw("n")}), 0)` })
@@ -137,7 +151,7 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
   } else {
     // Count the matches first, from the matches; then list from wherever is cheaper.
     const fromMatches = listStatements(db, user.role, query, search.kind, "matches");
-    total = (await fromMatches.count.execute(params))[0]!.total;
+    total = await countMatches(fromMatches, user, query, search, params);
     if (total === 0) rows = [];
     else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.execute(params);
   }
@@ -145,6 +159,21 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
     total,
     jobs: rows.map(({ street, city, updatedAt, ...r }): JobListRow => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),
   };
+}
+
+/**
+ * How many of the user's jobs a search matches. A word search by a role that sees the whole
+ * company counts inside the word index: first every company's matches (cheap); when they are few,
+ * checking each one's job row is cheapest; when many, the index counts the company's own through
+ * its scope tokens (migration 0008) without reading a job row.
+ */
+async function countMatches(st: ReturnType<typeof buildListStatements>, user: AuthUser, query: JobListQuery, search: Search, params: Record<string, unknown>) {
+  if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
+    const everywhere = Number((await st.wordMatches.execute({ term: search.term }))[0]?.total ?? 0);
+    if (everywhere === 0) return 0;
+    if (everywhere > FEW_MATCHES) return Number((await st.companyWordCount.execute({ scopedTerm: `scope : "${companyToken(user.companyId)}" AND ${search.term}` }))[0]?.total ?? 0);
+  }
+  return (await st.count.execute(params))[0]!.total;
 }
 
 export async function getJob(user: AuthUser, id: string) {

@@ -1,5 +1,6 @@
-// job_counts (migration 0007) must always equal count(*) of jobs per company and stage: checked
-// after inserts, stage changes, a move to another company and deletes, in random orders.
+// job_counts (migration 0007) must always equal count(*) of jobs per company and stage, and the
+// word index's scope column (migration 0008) must name each job's company: checked after inserts,
+// stage changes, a move to another company, renames and deletes, in random orders.
 import { eq, sql } from "drizzle-orm";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -16,6 +17,19 @@ beforeAll(async () => {
   await t.db.insert(companies).values({ id: other, name: "Other Co", slug: "other-co-counts" });
 });
 afterAll(() => t.cleanup());
+
+const token = (companyId: string) => `c${companyId.replace(/-/g, "")}`;
+
+/** Per company: the jobs the word index files under its scope token, and the jobs it really has. */
+async function scopes() {
+  const out: { company: string; indexed: number[]; real: number[] }[] = [];
+  for (const company of [demoCompanyId, other]) {
+    const indexed = await t.db.all<{ rowid: number }>(sql`select rowid from job_words where job_words match ${`scope : "${token(company)}"`} order by rowid`);
+    const real = await t.db.all<{ rowid: number }>(sql`select rowid from jobs where company_id = ${company} order by rowid`);
+    out.push({ company, indexed: indexed.map((r) => r.rowid), real: real.map((r) => r.rowid) });
+  }
+  return out;
+}
 
 async function counts() {
   const kept = await t.db.all<{ company_id: string; stage: string; n: number }>(sql`select company_id, stage, n from job_counts where n <> 0 order by company_id, stage`);
@@ -39,6 +53,7 @@ describe("job_counts", () => {
       fc.record({ kind: fc.constant("stage" as const), stage: fc.constantFrom(...jobStages), pick: fc.nat() }),
       fc.record({ kind: fc.constant("move" as const), pick: fc.nat() }),
       fc.record({ kind: fc.constant("delete" as const), pick: fc.nat() }),
+      fc.record({ kind: fc.constant("rename" as const), pick: fc.nat() }),
     );
     await fc.assert(
       fc.asyncProperty(fc.array(op, { minLength: 1, maxLength: 12 }), async (ops) => {
@@ -53,10 +68,13 @@ describe("job_counts", () => {
             await t.db.update(jobs).set({ companyId: target.companyId === other ? demoCompanyId : other }).where(eq(jobs.id, target.id));
           } else if (target && o.kind === "delete") {
             await t.db.delete(jobs).where(eq(jobs.id, target.id));
+          } else if (target && o.kind === "rename") {
+            await t.db.update(jobs).set({ title: `count test renamed ${n++}` }).where(eq(jobs.id, target.id));
           }
         }
         const { kept, real } = await counts();
         expect(kept).toEqual(real);
+        for (const s of await scopes()) expect(s.indexed, s.company).toEqual(s.real);
       }),
       { numRuns: 25 },
     );

@@ -1,4 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
+import { demoCompanyId } from "@/db/seed";
 import { actAs } from "../support/auth-mock";
 import { call, form } from "../support/route";
 import { disableUser, ids, seededDbForFile } from "./setup";
@@ -53,6 +54,9 @@ describe("GET /api/jobs", () => {
     expect(await numbers("ansyfie")).toEqual([1006]); // inside a word: no word begins so, the trigram index finds it
     expect(await numbers("tansy nowhere")).toEqual([]); // a word that matches nothing rules the job out
     expect(await numbers('"')).toEqual([]); // punctuation alone is not a syntax error
+    // the index's company tokens (migration 0008) are not words of any job
+    expect(await numbers(`c${demoCompanyId.replace(/-/g, "")}`)).toEqual([]);
+    expect(await numbers(`c${demoCompanyId.slice(0, 3)}`)).toEqual([]);
   });
 
   it("filters by stage, sorts and paginates", async () => {
