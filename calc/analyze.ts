@@ -6,13 +6,14 @@ import { resolveClimate } from "./climate/stations";
 import { checkWall } from "./crew-check";
 import { densePackEstimate, DEFAULT_STOREY_HEIGHT_FT, type DensePackEstimate } from "./dense-pack";
 import { CalcInputError } from "./errors";
+import { getWindowOrDoor } from "./materials";
 import { annualHeating, DEFAULT_GRID_LB_PER_KWH, type AnnualHeating } from "./energy";
-import { designHeatLoad, surfaceResult, sumByComponent, type DesignLoad, type EnvelopeResult, type SurfaceDef, type SurfaceResult, type UAByComponent } from "./envelope";
+import { designHeatLoad, surfaceResult, type DesignLoad, type EnvelopeResult, type SurfaceDef, type SurfaceResult, type UAByComponent } from "./envelope";
 import { MEASURE_LIFE_YEARS, savingsToInvestment, simplePayback, upvEscalated } from "./economics";
 import { computeInfiltration, type InfiltrationOptions, type InfiltrationResult } from "./infiltration";
 import { indoorDewPointF, moistureScreener, type MoistureScreen } from "./moisture";
 import type { HouseInput, HouseInputParsed } from "./schema";
-import { applyUpgrade, type HouseState } from "./upgrades";
+import { applyUpgradeWith, SurfaceIndex, type HouseState } from "./upgrades";
 import { prepareHouseInput, type Prepared } from "./validate";
 import { ventilation62_2 } from "./ventilation";
 import { softWarningsParsed } from "./warnings";
@@ -28,65 +29,157 @@ function assemblyDef(state: HouseState, key: string, path: string): AssemblyDef 
 }
 
 /**
- * The envelope of the house as the upgrades change it, one surface result per surface. An upgrade
- * changes a few surfaces (a new surface object, or an assembly key now meaning another definition);
- * only those are computed again, and the totals are summed afresh over all results in surface order,
- * so every figure is exactly what a whole-house evaluation gives.
+ * The envelope of the house as the upgrades change it. The house as found gets full per-surface
+ * results; after that an upgrade changes a few surfaces (a new surface object, or an assembly key now
+ * meaning another definition), and only those are worked out again, as plain numbers (opaque UA and
+ * each opening's UA, the same products as surfaceResult). Totals are summed afresh in surface and
+ * opening order, so every figure is bit-for-bit what a whole-house evaluation gives. The last house
+ * gets full results again: the house-as-found result of every surface it did not change, a new one
+ * for every surface it did.
  */
 class Envelope {
-  /** The surface objects and assembly definitions the results were computed for. */
+  readonly baseline: SurfaceResult[];
+  private readonly baseSurfaces: SurfaceDef[];
+  private readonly baseDefs: AssemblyDef[];
+  /** The current house: surface objects, their assembly definitions and results. */
   private surfaces: SurfaceDef[];
-  private defs: AssemblyDef[];
-  readonly results: SurfaceResult[];
+  readonly defs: AssemblyDef[];
   readonly assemblies: AssemblyResult[];
+  /** Per surface: 0 wall, 1 ceiling, 2 floor; opaque UA; its openings' UAs at openStart[i]… */
+  private kind: Uint8Array;
+  private opaque: Float64Array;
+  private openStart: Int32Array;
+  private openUA: Float64Array;
+  private openIsWindow: Uint8Array;
 
   constructor(state: HouseState) {
     const n = state.surfaces.length;
-    this.surfaces = state.surfaces;
+    this.surfaces = this.baseSurfaces = state.surfaces;
     this.defs = new Array(n);
-    this.results = new Array(n);
     this.assemblies = new Array(n);
-    for (let i = 0; i < n; i++) this.compute(state, i);
+    this.baseline = new Array(n);
+    for (let i = 0; i < n; i++) {
+      const s = state.surfaces[i];
+      this.resolve(state, i);
+      this.baseline[i] = surfaceResult(s, this.assemblies[i], "surfaces", i);
+    }
+    this.baseDefs = this.defs.slice();
+    this.kind = new Uint8Array(n);
+    this.opaque = new Float64Array(n);
+    this.openStart = new Int32Array(n + 1);
+    let m = 0;
+    for (let i = 0; i < n; i++) { this.openStart[i] = m; m += this.baseline[i].openings.length; }
+    this.openStart[n] = m;
+    this.openUA = new Float64Array(m);
+    this.openIsWindow = new Uint8Array(m);
+    for (let i = 0; i < n; i++) {
+      const r = this.baseline[i];
+      this.kind[i] = kindCode(r.kind);
+      this.opaque[i] = r.opaqueUA;
+      for (let j = 0, k = this.openStart[i]; j < r.openings.length; j++, k++) {
+        this.openUA[k] = r.openings[j].ua;
+        this.openIsWindow[k] = r.openings[j].kind === "window" ? 1 : 0;
+      }
+    }
   }
 
-  private compute(state: HouseState, i: number) {
-    const s = state.surfaces[i];
-    const def = assemblyDef(state, s.assemblyKey, "surfaces");
-    const a = computeAssembly(def, "surfaces");
+  private resolve(state: HouseState, i: number) {
+    const def = assemblyDef(state, state.surfaces[i].assemblyKey, "surfaces");
     this.defs[i] = def;
-    this.assemblies[i] = a;
-    this.results[i] = surfaceResult(s, a, "surfaces", i);
+    this.assemblies[i] = computeAssembly(def, "surfaces");
   }
 
-  /** Bring the results up to `next`, the state an upgrade left from the state they were computed for. */
+  /** The plain figures of surface i; false when its openings no longer fit its slot. */
+  private figures(i: number): boolean {
+    const s = this.surfaces[i];
+    const a = this.assemblies[i];
+    const bf = s.bufferFactor ?? 1;
+    const openings = s.openings ?? [];
+    const start = this.openStart[i];
+    if (openings.length !== this.openStart[i + 1] - start) return false;
+    let openingsArea = 0;
+    for (let j = 0; j < openings.length; j++) {
+      const o = openings[j];
+      const area = o.areaFt2 * (o.count ?? 1);
+      let u = o.uFactorIP;
+      if (u === undefined) {
+        const p = o.productKey === undefined ? undefined : getWindowOrDoor(o.productKey);
+        if (!p) return surfaceResult(s, a, "surfaces", i) === null; // throws the error naming the opening
+        u = p.uFactorIP;
+      }
+      this.openUA[start + j] = u * area * bf;
+      this.openIsWindow[start + j] = o.kind === "window" ? 1 : 0;
+      openingsArea += area;
+    }
+    this.kind[i] = kindCode(s.kind);
+    this.opaque[i] = a.uFactorIP * (s.grossAreaFt2 - openingsArea) * bf;
+    return true;
+  }
+
+  /** Bring the figures up to `next`, the state an upgrade left from `prev` (the current one). */
   update(prev: HouseState, next: HouseState) {
     const n = next.surfaces.length;
-    if (n !== this.surfaces.length || next.assemblies.size < prev.assemblies.size) {
-      // not a change an upgrade makes: start over
-      this.results.length = this.defs.length = this.assemblies.length = 0;
-      this.surfaces = next.surfaces;
-      for (let i = 0; i < n; i++) this.compute(next, i);
-      return;
-    }
     let keys: Set<string> | null = null;
     if (next.assemblies !== prev.assemblies) {
       const changed = new Set<string>();
       next.assemblies.forEach((d, k) => { if (prev.assemblies.get(k) !== d) changed.add(k); });
-      if (changed.size > 0) keys = changed;
+      if (changed.size > 0 || next.assemblies.size !== prev.assemblies.size) keys = changed;
     }
     if (next.surfaces === this.surfaces && keys === null) return;
+    const old = this.surfaces;
+    this.surfaces = next.surfaces;
+    if (n !== old.length || (keys !== null && next.assemblies.size < prev.assemblies.size)) return this.restart(next);
     for (let i = 0; i < n; i++) {
       const s = next.surfaces[i];
-      if (s !== this.surfaces[i] || (keys !== null && keys.has(s.assemblyKey))) this.compute(next, i);
+      if (s === old[i] && (keys === null || !keys.has(s.assemblyKey))) continue;
+      this.resolve(next, i);
+      if (!this.figures(i)) return this.restart(next);
     }
-    this.surfaces = next.surfaces;
   }
 
+  /** Not a change an upgrade makes (surfaces or openings added or removed): every surface again. */
+  private restart(state: HouseState) {
+    const n = state.surfaces.length;
+    this.defs.length = this.assemblies.length = n;
+    this.kind = new Uint8Array(n);
+    this.opaque = new Float64Array(n);
+    this.openStart = new Int32Array(n + 1);
+    let m = 0;
+    for (let i = 0; i < n; i++) { this.openStart[i] = m; m += state.surfaces[i].openings?.length ?? 0; }
+    this.openStart[n] = m;
+    this.openUA = new Float64Array(m);
+    this.openIsWindow = new Uint8Array(m);
+    for (let i = 0; i < n; i++) { this.resolve(state, i); this.figures(i); }
+  }
+
+  /** UA by component, summed as sumByComponent sums the per-surface results. */
   totals(): { ua: UAByComponent; totalUA: number } {
-    const ua = sumByComponent(this.results);
-    return { ua, totalUA: ua.walls + ua.ceilings + ua.floors + ua.windows + ua.doors };
+    let walls = 0, ceilings = 0, floors = 0, windows = 0, doors = 0;
+    const { kind, opaque, openUA, openIsWindow } = this;
+    for (let i = 0; i < kind.length; i++) {
+      const k = kind[i];
+      if (k === 0) walls += opaque[i]; else if (k === 1) ceilings += opaque[i]; else floors += opaque[i];
+    }
+    for (let k = 0; k < openUA.length; k++) if (openIsWindow[k] === 1) windows += openUA[k]; else doors += openUA[k];
+    const ua = { walls, ceilings, floors, windows, doors };
+    return { ua, totalUA: walls + ceilings + floors + windows + doors };
+  }
+
+  /** Full results of the current house (those of the house as found where a surface is unchanged). */
+  results(): SurfaceResult[] {
+    const n = this.surfaces.length;
+    const out: SurfaceResult[] = new Array(n);
+    const same = n === this.baseSurfaces.length;
+    for (let i = 0; i < n; i++) {
+      out[i] = same && this.surfaces[i] === this.baseSurfaces[i] && this.defs[i] === this.baseDefs[i]
+        ? this.baseline[i]
+        : surfaceResult(this.surfaces[i], this.assemblies[i], "surfaces", i);
+    }
+    return out;
   }
 }
+
+const kindCode = (kind: string) => (kind === "wall" ? 0 : kind === "ceiling" ? 1 : 2);
 
 function evaluation<E extends { ua: UAByComponent; totalUA: number }>(ctx: Ctx, cfm50: number, envelope: E) {
   const l = loadsAndEnergy(ctx, cfm50, envelope);
@@ -132,17 +225,18 @@ export function analyzePrepared(prepared: Prepared) {
   const base: HouseState = { assemblies, surfaces: h.surfaces, cfm50: h.blowerDoor.cfm50TestIn };
   const env = new Envelope(base);
   const baseAssemblies = env.assemblies.slice();
-  const baseline: HouseEvaluation = evaluation(ctx, base.cfm50, { surfaces: env.results.slice(), ...env.totals() });
+  const baseline: HouseEvaluation = evaluation(ctx, base.cfm50, { surfaces: env.baseline, ...env.totals() });
   const { discountRate: d, fuelEscalationRate: e } = h.economics;
   let state = base;
   let prev: { cfm50: number; envelope: { ua: UAByComponent; totalUA: number }; designLoad: DesignLoad; energy: AnnualHeating } = baseline;
   let final = baseline;
   const n = h.upgrades.length;
+  const ids = new SurfaceIndex(h.surfaces);
   const upgrades = h.upgrades.map((u, i) => {
-    const applied = applyUpgrade(state, u, `upgrades.${i}`, u.type === "air-sealing" ? h.blowerDoor.cfm50TestOut : undefined);
+    const applied = applyUpgradeWith(state, u, `upgrades.${i}`, u.type === "air-sealing" ? h.blowerDoor.cfm50TestOut : undefined, ids);
     env.update(state, applied.state);
     const totals = env.totals();
-    const after = i === n - 1 ? (final = evaluation(ctx, applied.state.cfm50, { surfaces: env.results, ua: totals.ua, totalUA: totals.totalUA })) : evaluation(ctx, applied.state.cfm50, totals);
+    const after = i === n - 1 ? (final = evaluation(ctx, applied.state.cfm50, { surfaces: env.results(), ua: totals.ua, totalUA: totals.totalUA })) : evaluation(ctx, applied.state.cfm50, totals);
     const s = savings(prev.energy, after.energy);
     const lifeYears = u.lifeYears ?? MEASURE_LIFE_YEARS[u.type];
     const result = {

@@ -47,19 +47,19 @@ function nominalInsulationRUncached(def: AssemblyDef): number {
 }
 
 /** Indices of the chosen surfaces, each once, in the order first named (a list is checked id by id). */
-function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | string[], kind: SurfaceDef["kind"] | null, path: string): number[] {
+function chosen(state: HouseState, ids: "all-walls" | "all-ceilings" | "all" | string[], kind: SurfaceDef["kind"] | null, path: string, ix?: SurfaceIndex): number[] {
   const surfaces = state.surfaces;
   const out: number[] = [];
   if (typeof ids === "string") {
     for (let i = 0; i < surfaces.length; i++) if (kind === null || surfaces[i].kind === kind) out.push(i);
     return out;
   }
-  const index = new Map<string, number>();
-  for (let i = 0; i < surfaces.length; i++) index.set(surfaces[i].id, i);
+  const index = ix !== undefined && ix.surfaces.length === surfaces.length ? ix.index() : surfaceIndex(surfaces);
   const taken = new Uint8Array(surfaces.length);
   for (let j = 0; j < ids.length; j++) {
     const id = ids[j];
-    const i = index.get(id) ?? -1;
+    let i = index.get(id) ?? -1;
+    if (i >= 0 && surfaces[i].id !== id) i = surfaceIndex(surfaces).get(id) ?? -1; // a shared index that does not fit: the state's own
     if (i < 0) throw CalcInputError.at(`${path}.${j}`, `no surface with id "${id}"`);
     if (kind !== null && surfaces[i].kind !== kind) throw CalcInputError.at(`${path}.${j}`, `surface "${id}" is a ${surfaces[i].kind}, not a ${kind}`);
     if (taken[i] === 0) { taken[i] = 1; out.push(i); }
@@ -106,10 +106,38 @@ function reassign(state: HouseState, idx: number[], suffix: string, derive: (def
   return { assemblies, surfaces, cfm50: state.cfm50 };
 }
 
+/** id → index of a list of surfaces, built on first use. */
+function surfaceIndex(surfaces: SurfaceDef[]): Map<string, number> {
+  const index = new Map<string, number>();
+  for (let i = 0; i < surfaces.length; i++) index.set(surfaces[i].id, i);
+  return index;
+}
+
+/**
+ * One id → index lookup for a sequence of upgrades: they never add, remove or reorder surfaces,
+ * so the index of the first house serves every later one (each hit is still checked by id).
+ */
+export class SurfaceIndex {
+  private map: Map<string, number> | undefined;
+  constructor(readonly surfaces: SurfaceDef[]) {}
+  index(): Map<string, number> { return (this.map ??= surfaceIndex(this.surfaces)); }
+}
+
 export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, testOutCfm50?: number): AppliedUpgrade {
+  return applyUpgradeWith(state, u, path, testOutCfm50);
+}
+
+/** applyUpgrade with an id index shared across a sequence of upgrades (analyzeHouse). */
+export function applyUpgradeWith(state: HouseState, u: UpgradeInput, path: string, testOutCfm50: number | undefined, ix?: SurfaceIndex): AppliedUpgrade {
   if (u.type === "dense-pack-walls") {
-    const idx = chosen(state, u.surfaceIds, "wall", `${path}.surfaceIds`);
-    for (const i of idx) if (!framedOf(state.assemblies.get(state.surfaces[i].assemblyKey)!)) throw CalcInputError.at(`${path}.surfaceIds`, `surface "${state.surfaces[i].id}" has no framed cavity to dense-pack`);
+    const idx = chosen(state, u.surfaceIds, "wall", `${path}.surfaceIds`, ix);
+    let lastKey: string | undefined;
+    for (const i of idx) {
+      const key = state.surfaces[i].assemblyKey;
+      if (key === lastKey) continue; // the same assembly as the surface before: already checked
+      if (!framedOf(state.assemblies.get(key)!)) throw CalcInputError.at(`${path}.surfaceIds`, `surface "${state.surfaces[i].id}" has no framed cavity to dense-pack`);
+      lastKey = key;
+    }
     const next = reassign(state, idx, `+dense-pack${u.rPerInchIP !== undefined ? `-R${u.rPerInchIP}/in` : ""}`, (def) => ({
       ...def, name: `${def.name}, dense-packed`,
       layers: def.layers.map((l) => ("framed" in l ? { framed: { ...l.framed, cavityFill: DENSE_PACK, fillFraction: 1, fillRValueIP: u.rPerInchIP !== undefined ? u.rPerInchIP * (memberDepthIn(l.framed) ?? 0) : undefined } } : l)),
@@ -117,7 +145,7 @@ export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, t
     return { state: next, details: { surfaceIds: idx.map((i) => state.surfaces[i].id) }, description: `Dense-pack cellulose in ${idx.length} wall surface(s)` };
   }
   if (u.type === "attic-insulation") {
-    const idx = chosen(state, u.surfaceIds, "ceiling", `${path}.surfaceIds`);
+    const idx = chosen(state, u.surfaceIds, "ceiling", `${path}.surfaceIds`, ix);
     const rPerIn = getMaterial(ATTIC_FILL)!.rPerInchIP!;
     const added = idx.map((i) => {
       const existing = nominalInsulationR(state.assemblies.get(state.surfaces[i].assemblyKey)!);
@@ -136,7 +164,7 @@ export function applyUpgrade(state: HouseState, u: UpgradeInput, path: string, t
     if (after >= state.cfm50) throw CalcInputError.at(`${path}.targetCfm50`, `must be below the ${Math.round(state.cfm50)} CFM50 the house has at this step`);
     return { state: { assemblies: state.assemblies, surfaces: state.surfaces, cfm50: after }, details: { fromCfm50: state.cfm50, toCfm50: after, basis: testOutCfm50 !== undefined ? "measured at test-out" : "target" }, description: `Air sealing from ${Math.round(state.cfm50)} to ${Math.round(after)} CFM50` };
   }
-  const idx = chosen(state, u.surfaceIds, null, `${path}.surfaceIds`);
+  const idx = chosen(state, u.surfaceIds, null, `${path}.surfaceIds`, ix);
   let count = 0;
   const surfaces = state.surfaces.slice();
   for (const i of idx) {
