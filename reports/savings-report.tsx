@@ -70,13 +70,11 @@ function ShareBar({ snapshot: sn }: { snapshot: ReportSnapshot }) {
       <View style={{ flexDirection: "row", height: 16, borderRadius: 3, overflow: "hidden" }}>
         {parts.map((x) => <View key={x.label} style={{ width: `${x.v * 100}%`, backgroundColor: x.color }} />)}
       </View>
-      <View style={{ flexDirection: "row", flexWrap: "wrap", marginTop: 5, gap: 12 }}>
-        {parts.map((x) => (
-          <View key={x.label} style={{ flexDirection: "row", alignItems: "center", gap: 4 }}>
-            <View style={{ width: 8, height: 8, backgroundColor: x.color, borderRadius: 1.5 }} />
-            <Text style={{ fontSize: 9 }}>{t.pdfText(`${x.label} ${t.percent(x.v)}`)}</Text>
-          </View>
-        ))}
+      <View style={{ flexDirection: "row", flexWrap: "wrap", alignItems: "center", marginTop: 5 }}>
+        {parts.map((x) => [
+          <View key={`${x.label}-key`} style={{ width: 8, height: 8, marginRight: 4, backgroundColor: x.color, borderRadius: 1.5 }} />,
+          <Text key={x.label} style={{ fontSize: 9, marginRight: 12 }}>{t.pdfText(`${x.label} ${t.percent(x.v)}`)}</Text>,
+        ])}
       </View>
       <Text style={[s.small, { marginTop: 3 }]}>Share of the heat the house loses on a cold day, as found.</Text>
     </View>
@@ -92,7 +90,7 @@ function Summary({ snapshot: sn }: { snapshot: ReportSnapshot }) {
   const draughtCut = a.baseline.infiltration.seasonal.cfm > 0 ? 1 - a.final.infiltration.seasonal.cfm / a.baseline.infiltration.seasonal.cfm : 0;
   const fuelName = FUEL_NAMES[a.input.heating.fuel] ?? a.input.heating.fuel;
   return (
-    <View>
+    <>
       <Text style={s.h1}>Your savings report</Text>
       <Text style={{ fontSize: 12, fontWeight: 600, marginTop: 6 }}>{t.pdfText(addressLine(sn))}</Text>
       <Text style={[s.muted, { marginTop: 2 }]}>
@@ -147,7 +145,7 @@ function Summary({ snapshot: sn }: { snapshot: ReportSnapshot }) {
           )}
         </Text>
       </View>
-    </View>
+    </>
   );
 }
 
@@ -166,7 +164,7 @@ function Charts({ snapshot: sn }: { snapshot: ReportSnapshot }) {
   const cumulative = cumulativeSavings(a);
   const measured = sn.leakageBasis === "measured";
   return (
-    <View>
+    <>
       <Text style={s.h2}>What changes</Text>
       <ChartFrame
         title="Heat loss by part of the house, on a design day"
@@ -176,24 +174,20 @@ function Charts({ snapshot: sn }: { snapshot: ReportSnapshot }) {
         <PairedBars rows={rows} width={CONTENT_W} format={(v) => t.num(v)} />
       </ChartFrame>
       <View style={{ flexDirection: "row", gap: 16 }}>
-        <View style={{ width: half }}>
-          <ChartFrame title="Heating cost a year" caption={steps.length > 0 && steps.length <= 3 ? "Steps follow the numbered upgrades on page 1, in order." : "At today's fuel price."}>
-            <Columns columns={costColumns} width={half} height={130} format={(v) => t.usd(v)} />
-          </ChartFrame>
-        </View>
-        <View style={{ width: half }}>
-          <ChartFrame title="Air leakage (blower door, CFM50)" caption={measured ? "After: measured at test-out." : "After: the air-sealing target, measured at test-out."}>
-            <Columns
-              columns={[
-                { label: "Test-in", value: a.baseline.cfm50, tone: "before" },
-                { label: measured ? "Test-out" : "After the plan", value: a.final.cfm50, tone: "after" },
-              ]}
-              width={half}
-              height={130}
-              format={(v) => t.num(v)}
-            />
-          </ChartFrame>
-        </View>
+        <ChartFrame width={half} title="Heating cost a year" caption={steps.length > 0 && steps.length <= 3 ? "Steps follow the numbered upgrades on page 1, in order." : "At today's fuel price."}>
+          <Columns columns={costColumns} width={half} height={130} format={(v) => t.usd(v)} />
+        </ChartFrame>
+        <ChartFrame width={half} title="Air leakage (blower door, CFM50)" caption={measured ? "After: measured at test-out." : "After: the air-sealing target, measured at test-out."}>
+          <Columns
+            columns={[
+              { label: "Test-in", value: a.baseline.cfm50, tone: "before" },
+              { label: measured ? "Test-out" : "After the plan", value: a.final.cfm50, tone: "after" },
+            ]}
+            width={half}
+            height={130}
+            format={(v) => t.num(v)}
+          />
+        </ChartFrame>
       </View>
       <ChartFrame
         title="Savings add up against the cost of the work"
@@ -202,7 +196,7 @@ function Charts({ snapshot: sn }: { snapshot: ReportSnapshot }) {
       >
         <CumulativeChart points={cumulative} cost={a.package.costUSD} width={CONTENT_W} height={150} format={(v) => t.usd(v)} />
       </ChartFrame>
-    </View>
+    </>
   );
 }
 
@@ -210,7 +204,7 @@ function Upgrades({ snapshot: sn }: { snapshot: ReportSnapshot }) {
   const a = sn.analysis;
   const pkg = a.package;
   return (
-    <View>
+    <>
       <Heading ahead={90}>Your upgrades</Heading>
       <P>Each saving is worked out on the house the earlier upgrades leave, so the savings add up to the whole plan.</P>
       <Table
@@ -229,7 +223,7 @@ function Upgrades({ snapshot: sn }: { snapshot: ReportSnapshot }) {
       <P style={[s.small, { marginTop: 4 }]}>
         {`${costBasisNote(sn) ? `${costBasisNote(sn)} ` : ""}SIR is the savings-to-investment ratio: what an upgrade saves over its life, in today's money, divided by its cost. 1 or more means it repays its cost. Discount rate ${t.percent(a.input.economics.discountRate, 1)}, fuel price rising ${t.percent(a.input.economics.fuelEscalationRate, 1)} a year.`}
       </P>
-    </View>
+    </>
   );
 }
 
@@ -240,7 +234,7 @@ function MoistureVentilation({ snapshot: sn }: { snapshot: ReportSnapshot }) {
   const risky = a.moisture.after.some((m) => m.atRisk.length > 0);
   const verdict = (x: typeof v.after) => (x.needsFan ? `a fan is needed: ${t.flow(x.fanCfm)} continuous` : "no fan is needed");
   return (
-    <View>
+    <>
       <View wrap={false}>
         <Heading>Moisture and fresh air</Heading>
         <Text style={s.h3}>Fresh air (ASHRAE 62.2-2016)</Text>
@@ -266,7 +260,7 @@ function MoistureVentilation({ snapshot: sn }: { snapshot: ReportSnapshot }) {
           </P>
         ) : null}
       </View>
-    </View>
+    </>
   );
 }
 
@@ -323,7 +317,7 @@ function How({ snapshot: sn }: { snapshot: ReportSnapshot }) {
     ["Economics", `discount rate ${t.percent(h.economics.discountRate, 1)}, fuel price escalation ${t.percent(h.economics.fuelEscalationRate, 1)} a year`],
   ];
   return (
-    <View>
+    <>
       <View wrap={false}>
         <Heading>How we calculated this</Heading>
         <Text style={s.h3}>Inputs</Text>
@@ -352,7 +346,7 @@ function How({ snapshot: sn }: { snapshot: ReportSnapshot }) {
           )}
         </Text>
       </View>
-    </View>
+    </>
   );
 }
 

@@ -49,8 +49,8 @@ export function Table({ columns, rows, foot, fontSize = 9.5 }: { columns: Column
     </Text>
   );
   return (
-    <View style={{ fontSize }}>
-      <View style={{ flexDirection: "row", borderBottomWidth: 1, borderBottomColor: colors.spruce700, color: colors.muted }} fixed={false} wrap={false}>
+    <>
+      <View style={{ flexDirection: "row", borderBottomWidth: 1, borderBottomColor: colors.spruce700, color: colors.muted }} wrap={false}>
         {columns.map((c, i) => (
           <Text key={i} style={{ width: `${c.width}%`, textAlign: c.align ?? "left", paddingVertical: 3, paddingHorizontal: 4, fontWeight: 700, fontSize: fontSize - 1 }}>
             {pdfText(c.title)}
@@ -58,29 +58,29 @@ export function Table({ columns, rows, foot, fontSize = 9.5 }: { columns: Column
         ))}
       </View>
       {rows.map((r, ri) => (
-        <View key={ri} wrap={false} style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: colors.line, backgroundColor: ri % 2 ? colors.white : colors.paper }}>
+        <View key={ri} wrap={false} style={{ flexDirection: "row", fontSize, borderBottomWidth: 0.5, borderBottomColor: colors.line, backgroundColor: ri % 2 ? colors.white : colors.paper }}>
           {columns.map((c, i) => cell(c, i, r[i] ?? ""))}
         </View>
       ))}
       {foot ? (
-        <View wrap={false} style={{ flexDirection: "row", borderTopWidth: 1, borderTopColor: colors.charcoal }}>
+        <View wrap={false} style={{ flexDirection: "row", fontSize, borderTopWidth: 1, borderTopColor: colors.charcoal }}>
           {columns.map((c, i) => cell(c, i, foot[i] ?? "", true))}
         </View>
       ) : null}
-    </View>
+    </>
   );
 }
 
 /** Label / value pairs in two columns. */
 export function Facts({ items, labelWidth = 42 }: { items: [string, string][]; labelWidth?: number }) {
   return (
-    <View>
+    <>
       {items.map(([k, v], i) => (
         <View key={i} style={{ flexDirection: "row", paddingVertical: 2, borderBottomWidth: 0.5, borderBottomColor: colors.line }} wrap={false}>
           <Text style={{ width: `${labelWidth}%`, color: colors.muted, paddingRight: 6 }}>{pdfText(k)}</Text>
           <Text style={{ width: `${100 - labelWidth}%` }}>{pdfText(v)}</Text>
         </View>
       ))}
-    </View>
+    </>
   );
 }

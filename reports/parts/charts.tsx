@@ -37,20 +37,18 @@ const ticks = (max: number, count = 5) => {
 
 function Legend({ items }: { items: [string, string][] }) {
   return (
-    <View style={{ flexDirection: "row", gap: 12, marginTop: 4 }}>
-      {items.map(([label, color]) => (
-        <View key={label} style={{ flexDirection: "row", alignItems: "center", gap: 4 }}>
-          <View style={{ width: 9, height: 9, backgroundColor: color, borderRadius: 1.5 }} />
-          <Text style={{ fontSize: 8.5, color: colors.charcoal }}>{pdfText(label)}</Text>
-        </View>
-      ))}
+    <View style={{ flexDirection: "row", alignItems: "center", marginTop: 4 }}>
+      {items.map(([label, color]) => [
+        <View key={`${label}-key`} style={{ width: 9, height: 9, marginRight: 4, backgroundColor: color, borderRadius: 1.5 }} />,
+        <Text key={label} style={{ fontSize: 8.5, marginRight: 12, color: colors.charcoal }}>{pdfText(label)}</Text>,
+      ])}
     </View>
   );
 }
 
-export function ChartFrame({ title, caption, children, legend }: { title: string; caption?: string; children: ReactNode; legend?: [string, string][] }) {
+export function ChartFrame({ title, caption, children, legend, width }: { title: string; caption?: string; children: ReactNode; legend?: [string, string][]; width?: number }) {
   return (
-    <View wrap={false} style={{ marginBottom: 12 }}>
+    <View wrap={false} style={width === undefined ? { marginBottom: 12 } : { marginBottom: 12, width }}>
       <Text style={{ fontWeight: 700, fontSize: 10.5, color: colors.charcoal, marginBottom: 4 }}>{pdfText(title)}</Text>
       {children}
       {legend ? <Legend items={legend} /> : null}

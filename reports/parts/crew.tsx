@@ -11,7 +11,7 @@ export function CrewSection({ crew, thresholds }: { crew: CrewSummarySnapshot; t
   const b = crew.bags;
   const to = crew.testOut;
   return (
-    <View>
+    <>
       <View wrap={false}>
         <Heading>What the crew did</Heading>
         <P>{`From the crew's log of ${crew.entries} ${crew.entries === 1 ? "entry" : "entries"}, as it stood when this report was issued. The estimate is the bag count worked out from the wall cavities before the work.`}</P>
@@ -48,6 +48,6 @@ export function CrewSection({ crew, thresholds }: { crew: CrewSummarySnapshot; t
       <P style={[s.small, { marginTop: 4 }]}>
         {`A wall that takes much more than its estimate may be losing material into an attic, chase, soffit or basement; one that finishes well under may have voids or low density. The crew stops, looks, and probes or re-blows. The checks flag a wall above ${t.num(thresholds.high, 2)} times or, once finished, below ${t.num(thresholds.low, 2)} times its estimate (common practice).`}
       </P>
-    </View>
+    </>
   );
 }

@@ -1,6 +1,7 @@
 // The photos page: the photos the auditor chose when issuing, before/after pairs side by side,
 // the rest grouped by tag, each with its caption. Images are the stored thumbnails (JPEG bytes
 // handed in by the caller); nothing here reads storage or the database.
+import { Fragment } from "react";
 import { Image, Text, View } from "@react-pdf/renderer";
 import { arrangePhotos } from "@/lib/documents/photo-groups";
 import type { SnapshotPhoto } from "@/lib/documents/snapshot";
@@ -44,7 +45,7 @@ function Row({ children }: { children: React.ReactNode }) {
 export function PhotosSection({ photos, images }: { photos: SnapshotPhoto[]; images: Record<string, Buffer> }) {
   const { pairs, groups } = arrangePhotos(photos);
   return (
-    <View>
+    <>
       <Heading>Photos from your house</Heading>
       <P>{`${photos.length === 1 ? "The photo" : `The ${photos.length} photos`} your auditor chose for this report.`}</P>
       {pairs.length ? <Heading level={3} ahead={120}>Before and after</Heading> : null}
@@ -58,14 +59,14 @@ export function PhotosSection({ photos, images }: { photos: SnapshotPhoto[]; ima
         const rows: SnapshotPhoto[][] = [];
         for (let i = 0; i < g.photos.length; i += 2) rows.push(g.photos.slice(i, i + 2));
         return (
-          <View key={g.tag}>
+          <Fragment key={g.tag}>
             <Heading level={3} ahead={120}>{tagNames[g.tag]}</Heading>
             {rows.map((r, i) => (
               <Row key={i}>{r.map((p) => <PhotoCell key={p.id} photo={p} image={images[p.id]} />)}</Row>
             ))}
-          </View>
+          </Fragment>
         );
       })}
-    </View>
+    </>
   );
 }
