@@ -8,6 +8,7 @@ import { writeFile } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { PDFParse } from "pdf-parse";
+import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as f from "@/components/assessment/results/format";
 import { headline, type ReportSnapshot } from "@/lib/documents/snapshot";
@@ -163,6 +164,63 @@ describe("savings report PDF after test-out", () => {
     expect(t).toContain("The leakage figures are measured");
     expect(t).toContain(f.num(snap.analysis.final.cfm50));
     expect(t).toContain("Test-out");
+  });
+});
+
+// A report that runs well past its demo length: the crew log, photos on several pages, and twice
+// the cautions and methods. Pages split inside sections, so the frame and the numbering must follow
+// onto every continued page, and no section or photo-group heading may be left alone at a page foot.
+describe("long savings report PDF", () => {
+  const base = demoSnapshot("savings-report", { measured: true });
+  const DAY = 86_400_000;
+  const captions = ["Attic hatch before", "Attic hatch after", "North wall before", "North wall after", "Blowing the north wall", "Infrared scan, north wall", "Plugging holes", "Infrared scan, attic", "Basement rim"];
+  const tags = ["before", "after", "before", "after", "during", "thermal", "during", "thermal", "before"] as const;
+  const photos = tags.map((tag, i) => ({ id: `p${i}`, tag, caption: captions[i]!, surfaceId: i < 4 ? `s${i >> 1}` : null, surfaceLabel: i < 4 ? `Surface ${i >> 1}` : null, takenAt: base.issuedAt - i * DAY, width: i % 2 ? 480 : 640, height: i % 2 ? 640 : 480 }));
+  const snap: ReportSnapshot = {
+    ...base,
+    photos,
+    crewSummary: {
+      entries: 23,
+      bags: { expected: 310, logged: 335.5, ratio: 1.082 },
+      holes: { expected: 196, logged: 180 },
+      wallsFinished: 8,
+      wallsTotal: 9,
+      perWall: Array.from({ length: 9 }, (_, i) => ({ surfaceId: `w${i}`, name: `Wall ${i + 1}`, expectedBags: 40 + i, loggedBags: 38 + i * 1.5, ratio: (38 + i * 1.5) / (40 + i), status: "ok", finished: i !== 3 })),
+      warnings: Array.from({ length: 6 }, (_, i) => ({ wall: `Wall ${i + 1}`, kind: i % 2 ? "overfill" : "underfill", bagsAtRaise: 50 + i, raisedAt: base.issuedAt - i * DAY, state: (["open", "resolved", "cleared"] as const)[i % 3], resolution: i % 3 === 1 ? { note: "Chase open to the attic, blocked and re-blown", by: "Sam", at: base.issuedAt - i * DAY + 3_600_000 } : null })),
+      testOut: { testInCfm50: 3900, predictedCfm50: 2400, measuredCfm50: 2250, measuredReductionPct: 42, testedAt: base.issuedAt + 30 * DAY },
+    },
+    analysis: {
+      ...base.analysis,
+      cautions: [...base.analysis.cautions, ...base.analysis.cautions.map((c) => ({ ...c, id: `${c.id}-again` }))],
+      methods: [...base.analysis.methods, ...base.analysis.methods] as unknown as typeof base.analysis.methods,
+    },
+  };
+  const headings = [
+    "What the crew did", "Your upgrades", "Moisture and fresh air", "Fresh air (ASHRAE 62.2-2016)", "Moisture in walls and ceilings after the work", "Safety during the work",
+    "How we calculated this", "Inputs", "Climate data", "Notes on the inputs", "Methods and sources", "Photos from your house", "Before and after", "During the work", "Thermal image", "Before",
+  ];
+  let parsed: Parsed;
+  beforeAll(async () => {
+    const images: Record<string, Buffer> = {};
+    for (const ph of photos) images[ph.id] = await sharp({ create: { width: ph.width, height: ph.height, channels: 3, background: "#806040" } }).jpeg().toBuffer();
+    parsed = await parse(await renderSnapshotPdf(snap, { images }));
+  });
+
+  it("carries the frame and Page N of M onto every continued page", () => {
+    expect(parsed.total).toBeGreaterThanOrEqual(8);
+    expectFrames(parsed, "Kestrel Bay Home Performance");
+    const t = fold(parsed.text);
+    for (const c of captions) expect(t).toContain(c);
+    for (let i = 1; i <= 9; i++) expect(t).toContain(`Wall ${i}`);
+  });
+
+  it("never leaves a heading alone at the foot of a page", () => {
+    // The frame's text (title band, company, page number) is dropped wherever extraction puts it.
+    const unframed = (line: string) => line.replace(/^SAVINGS REPORT .*$/, "").replace("Kestrel Bay Home Performance", "").replace(/Page \d+ of \d+/, "").trim();
+    for (const page of parsed.pages.slice(0, -1)) {
+      const lines = page.text.split("\n").map(unframed).filter(Boolean);
+      expect(headings, `page ${page.num} ends with "${lines.at(-1)}"`).not.toContain(lines.at(-1));
+    }
   });
 });
 
