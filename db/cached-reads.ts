@@ -109,13 +109,27 @@ export function cachedReader(path: string, opts: { timeout?: number } = {}): Cac
     return prepared;
   };
 
+  const close = () => {
+    cache.clear();
+    db?.close();
+    db = null;
+  };
+
   return {
     read(input) {
       const sql = typeof input === "string" ? input : input.sql;
       const prepared = prepare(sql);
       if (!prepared) return null;
       const { stmt, columns, columnTypes, proto, named } = prepared;
-      const raw = stmt.all(bindArgs(typeof input === "string" ? undefined : input.args)) as unknown[][];
+      let raw: unknown[][];
+      try {
+        raw = stmt.all(bindArgs(typeof input === "string" ? undefined : input.args)) as unknown[][];
+      } catch (error) {
+        // A statement stopped part-way could keep this connection's read snapshot open and later
+        // reads would see old data: drop the connection and every statement, and start afresh.
+        close();
+        throw error;
+      }
       const n = columns.length;
       const rows: Row[] = new Array(raw.length);
       for (let r = 0; r < raw.length; r++) {
@@ -132,11 +146,7 @@ export function cachedReader(path: string, opts: { timeout?: number } = {}): Cac
       }
       return resultSet(columns, columnTypes, rows);
     },
-    close() {
-      cache.clear();
-      db?.close();
-      db = null;
-    },
+    close,
   };
 }
 

@@ -104,3 +104,18 @@ describe("the database client reads through the cache", () => {
     await expect(t.db.$client.execute("select nope from jobs")).rejects.toMatchObject({ code: "SQLITE_ERROR" });
   });
 });
+
+describe("after a failed read", () => {
+  it("starts afresh and sees later writes", async () => {
+    const own = cachedReader(sqliteFilePath(t.url)!);
+    try {
+      expect(own.read("select count(*) as n from companies")!.rows[0]!.n).toBeGreaterThan(0);
+      expect(() => own.read({ sql: "select abs(?) as v", args: [-9223372036854775808n] })).toThrow(); // integer overflow inside SQLite, mid-statement
+      await t.db.insert(companies).values({ id: crypto.randomUUID(), name: "Later Co", slug: `later-${Date.now()}` });
+      const rows = own.read("select name from companies where name = 'Later Co'")!.rows;
+      expect(rows).toHaveLength(1);
+    } finally {
+      own.close();
+    }
+  });
+});
