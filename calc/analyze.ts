@@ -119,16 +119,20 @@ class Envelope {
   /** Bring the figures up to `next`, the state an upgrade left from `prev` (the current one). */
   update(prev: HouseState, next: HouseState) {
     const n = next.surfaces.length;
+    // Keys that now mean another definition. A key new to this house cannot be on an unchanged
+    // surface (that surface's key resolved in the house before), so only redefined keys count.
     let keys: Set<string> | null = null;
+    let removed = false;
     if (next.assemblies !== prev.assemblies) {
       const changed = new Set<string>();
-      next.assemblies.forEach((d, k) => { if (prev.assemblies.get(k) !== d) changed.add(k); });
-      if (changed.size > 0 || next.assemblies.size !== prev.assemblies.size) keys = changed;
+      next.assemblies.forEach((d, k) => { const was = prev.assemblies.get(k); if (was !== undefined && was !== d) changed.add(k); });
+      if (changed.size > 0) keys = changed;
+      prev.assemblies.forEach((_, k) => { if (!next.assemblies.has(k)) removed = true; });
     }
-    if (next.surfaces === this.surfaces && keys === null) return;
+    if (next.surfaces === this.surfaces && keys === null && !removed) return;
     const old = this.surfaces;
     this.surfaces = next.surfaces;
-    if (n !== old.length || (keys !== null && next.assemblies.size < prev.assemblies.size)) return this.restart(next);
+    if (n !== old.length || removed) return this.restart(next);
     for (let i = 0; i < n; i++) {
       const s = next.surfaces[i];
       if (s === old[i] && (keys === null || !keys.has(s.assemblyKey))) continue;

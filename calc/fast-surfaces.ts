@@ -35,12 +35,13 @@ function opening(o: unknown): OpeningParsed | undefined {
   if (typeof kind !== "string" || !OPENING_KIND_SET.has(kind)) return undefined;
   if (!inBound(areaFt2, OPENING_NUMS.areaFt2) || !optNum(count, OPENING_NUMS.count) || !optNum(uFactorIP, OPENING_NUMS.uFactorIP)) return undefined;
   if (!optText(productKey, OPENING_TEXTS.productKey) || !optText(label, OPENING_TEXTS.label)) return undefined;
-  // zod's output: the schema's keys in its order, optional keys only when the input has them, unknown keys dropped.
+  // zod's output: the schema's keys in its order, optional keys only when the input has them, unknown keys dropped
+  // (a defined value is a present key, so `in` is asked only of an undefined one).
   const out: Record<string, unknown> = { kind, areaFt2 };
-  if ("count" in o) out.count = count;
-  if ("productKey" in o) out.productKey = productKey;
-  if ("uFactorIP" in o) out.uFactorIP = uFactorIP;
-  if ("label" in o) out.label = label;
+  if (count !== undefined || "count" in o) out.count = count;
+  if (productKey !== undefined || "productKey" in o) out.productKey = productKey;
+  if (uFactorIP !== undefined || "uFactorIP" in o) out.uFactorIP = uFactorIP;
+  if (label !== undefined || "label" in o) out.label = label;
   return out as OpeningParsed;
 }
 
@@ -62,10 +63,10 @@ function surface(s: unknown): SurfaceParsed | undefined {
     }
   }
   const out: Record<string, unknown> = { id, name, kind, orientation, grossAreaFt2, assemblyKey };
-  if ("heightFt" in s) out.heightFt = heightFt;
+  if (heightFt !== undefined || "heightFt" in s) out.heightFt = heightFt;
   out.openings = outOpenings;
-  if ("bufferFactor" in s) out.bufferFactor = bufferFactor;
-  if ("blockedBayFraction" in s) out.blockedBayFraction = blockedBayFraction;
+  if (bufferFactor !== undefined || "bufferFactor" in s) out.bufferFactor = bufferFactor;
+  if (blockedBayFraction !== undefined || "blockedBayFraction" in s) out.blockedBayFraction = blockedBayFraction;
   return out as SurfaceParsed;
 }
 

@@ -86,7 +86,12 @@ function parse(input: unknown): { success: true; data: HouseInputParsed } | { su
   const shell = houseInputShellSchema.safeParse(input);
   if (shell.success) {
     const surfaces = fastParseSurfaces(shell.data.surfaces);
-    if (surfaces) return { success: true, data: { ...shell.data, surfaces } };
+    if (surfaces) {
+      // zod's output object is this call's own: the parsed surfaces go in place (same key order as a copy)
+      const data = shell.data as unknown as HouseInputParsed;
+      data.surfaces = surfaces;
+      return { success: true, data };
+    }
   }
   const r = houseInputSchema.safeParse(input);
   return r.success ? { success: true, data: r.data } : { success: false, issues: r.error.issues };

@@ -76,7 +76,7 @@ describe("optimised analyzeHouse = the straightforward reference, exactly", () =
     stories: fc.constantFrom(1, 1.5, 2, 3),
     fuel: fc.constantFrom("natural-gas", "oil", "heat-pump") as fc.Arbitrary<"natural-gas" | "oil" | "heat-pump">,
     customAssemblies: fc.boolean(),
-    crewLog: fc.boolean(),
+    crewLog: fc.oneof({ arbitrary: fc.constant(false), weight: 4 }, { arbitrary: fc.constant(true), weight: 1 }),
   });
 
   function house(p: typeof houseArb extends fc.Arbitrary<infer T> ? T : never): HouseInput {
@@ -122,7 +122,8 @@ describe("optimised analyzeHouse = the straightforward reference, exactly", () =
   it("generated houses (fast-check): the same result, or the same refusal", () => {
     let analysed = 0;
     fc.assert(fc.property(houseArb, (p) => { if (expectSame(house(p)).ok) analysed++; }), { numRuns: 300 });
-    expect(analysed).toBeGreaterThan(150); // most generated houses are analysed, not refused
+    // most generated houses are analysed, not refused (about 190 of 300; 120 is far below any likely run)
+    expect(analysed).toBeGreaterThan(120);
   });
 
   it("generated invalid inputs are refused with the same issues", () => {
