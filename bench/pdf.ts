@@ -3,6 +3,7 @@
 // after 50 consecutive renders against after the first 5. Prints figures beside the targets of
 // issue 5 and never throws on a missed target: figures depend on the machine and its load.
 // Run: npx tsx bench/pdf.ts (or through runPdfBench()).
+import { loadavg } from "node:os";
 import { pathToFileURL } from "node:url";
 import { Document, Page, renderToBuffer, Text, View } from "@react-pdf/renderer";
 import { createElement as h } from "react";
@@ -73,6 +74,8 @@ export async function runPdfBench() {
   console.log("\n## PDF: demo savings report vs a plain React-PDF document of the same page count");
   // The server renders PDFs with React's production build; `npm run bench` sets NODE_ENV for that.
   console.log(`React build: ${process.env.NODE_ENV === "production" ? "production" : "development (slower: run through npm run bench, or NODE_ENV=production)"}`);
+  const load = () => loadavg().map((x) => x.toFixed(2)).join(", ");
+  console.log(`load average at start: ${load()}`);
 
   const t0 = performance.now();
   const first = await renderSnapshotPdf(snapshot);
@@ -98,6 +101,7 @@ export async function runPdfBench() {
   console.log(`ratio report / plain: ${ratio.toFixed(2)}x (target <= ${TARGET_RATIO}x: ${ok(ratio <= TARGET_RATIO)})`);
   console.log(`  report runs (ms): ${report.map((x) => x.toFixed(0)).join(" ")}`);
   console.log(`  plain runs (ms):  ${base.map((x) => x.toFixed(0)).join(" ")}`);
+  console.log(`load average after the timed runs: ${load()} (other work on the machine slows both documents, not always alike)`);
 
   // Memory creep: resident size after the first 5 of 50 consecutive renders, and after all 50.
   // Between renders the event loop turns once, as it does between requests in a server: Yoga's

@@ -49,8 +49,11 @@ function SmallFigure({ title, value, unit, detail }: { title: string; value: str
   return (
     <View style={[s.card, { flex: 1 }]} wrap={false}>
       <Text style={{ fontWeight: 700, color: colors.muted, fontSize: 9 }}>{t.pdfText(title.toUpperCase())}</Text>
-      <Text style={{ fontFamily: s.display.fontFamily, fontWeight: 600, fontSize: 20, lineHeight: 1.15, color: colors.spruce800, marginTop: 3 }}>{t.pdfText(value)}</Text>
-      <Text style={{ fontWeight: 600, color: colors.spruce800, marginBottom: 3 }}>{t.pdfText(unit)}</Text>
+      <Text style={{ fontWeight: 600, color: colors.spruce800, marginTop: 3, marginBottom: 3 }}>
+        <Text style={{ fontFamily: s.display.fontFamily, fontSize: 20, lineHeight: 1.15 }}>{t.pdfText(value)}</Text>
+        {"\n"}
+        {t.pdfText(unit)}
+      </Text>
       <Text style={[s.small, { color: colors.charcoal }]}>{t.pdfText(detail)}</Text>
     </View>
   );

@@ -32,8 +32,11 @@ export function BigFigure({ label, value, unit, detail, tone = "spruce" }: { lab
   return (
     <View style={{ flex: 1, backgroundColor: bg, borderRadius: 6, paddingVertical: 12, paddingHorizontal: 12 }} wrap={false}>
       <Text style={{ fontSize: 9, fontWeight: 700, color: colors.muted, letterSpacing: 0.5 }}>{pdfText(label.toUpperCase())}</Text>
-      <Text style={{ fontFamily: s.display.fontFamily, fontWeight: 700, fontSize: 34, lineHeight: 1.1, color: fg, marginTop: 4 }}>{pdfText(value)}</Text>
-      <Text style={{ fontSize: 10.5, fontWeight: 600, color: fg }}>{pdfText(unit)}</Text>
+      <Text style={{ color: fg, marginTop: 4 }}>
+        <Text style={{ fontFamily: s.display.fontFamily, fontWeight: 700, fontSize: 34, lineHeight: 1.1 }}>{pdfText(value)}</Text>
+        {"\n"}
+        <Text style={{ fontSize: 10.5, fontWeight: 600 }}>{pdfText(unit)}</Text>
+      </Text>
       {detail ? <Text style={{ fontSize: 9, color: colors.charcoal, marginTop: 4 }}>{pdfText(detail)}</Text> : null}
     </View>
   );
