@@ -1,5 +1,6 @@
 // Measurements taken in Chromium on the assessment page, shared by the browser test
 // (tests/browser/assessment-large.test.ts) and `npm run bench` (bench/browser.ts).
+import { writeFileSync } from "node:fs";
 import type { Locator, Page } from "playwright-core";
 
 export type Summary = { n: number; median: number; p95: number; max: number };
@@ -91,7 +92,8 @@ type ProfileNode = { id: number; callFrame: { functionName: string; url: string;
 /**
  * Starts Chromium's counters (Performance.getMetrics) and its CPU profiler on the page; `stop(n)`
  * prints, per keystroke over `n`, the script, style and layout time and the 25 functions with the
- * most self time (minified names, with their file and position).
+ * most self time (minified names, with their file and position); with BENCH_CPUPROFILE=<file> it
+ * also writes the profile there.
  */
 export async function startProfile(page: Page) {
   const cdp = await page.context().newCDPSession(page);
@@ -104,6 +106,8 @@ export async function startProfile(page: Page) {
   return {
     async stop(n: number) {
       const { profile } = (await cdp.send("Profiler.stop")) as unknown as { profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] } };
+      // BENCH_CPUPROFILE=<file>: the whole profile, for Chromium DevTools' Performance panel.
+      if (process.env.BENCH_CPUPROFILE) writeFileSync(process.env.BENCH_CPUPROFILE, JSON.stringify(profile));
       const after = await metrics();
       const per = (k: string) => `${(((after[k] ?? 0) - (before[k] ?? 0)) * 1000 / n).toFixed(1)} ms`;
       console.log(`per keystroke: task ${per("TaskDuration")}, script ${per("ScriptDuration")}, style ${per("RecalcStyleDuration")}, layout ${per("LayoutDuration")}`);

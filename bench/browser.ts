@@ -7,6 +7,7 @@
 // without one it says so and prints nothing else. Never fails on a missed target.
 // Run: npx tsx bench/browser.ts (or through runBrowserBench()); BENCH_PROFILE=1 adds, per
 // keystroke, Chromium's script / style / layout time and the functions with the most self time.
+// BENCH_TRACE=<file> writes a Chromium trace of the measured keystrokes.
 import { spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
@@ -27,6 +28,8 @@ const base = `http://127.0.0.1:${PORT}`;
 const KEYSTROKES = Number(process.env.BENCH_KEYSTROKES ?? 40);
 const TARGET_MS = 100;
 const chromiumPath = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+
+const TRACE_CATEGORIES = ["devtools.timeline", "disabled-by-default-devtools.timeline", "disabled-by-default-devtools.timeline.frame", "blink", "cc", "viz", "benchmark", "toplevel"];
 
 const kib = (b: number) => `${(b / 1024).toFixed(0)} KiB`;
 
@@ -80,7 +83,11 @@ export async function runBrowserBench() {
     await measureKeystrokes(page, field, 4); // warm-up: first renders, JIT
     // BENCH_PROFILE=1: where the milliseconds go while typing (Chromium's own counters and a CPU profile).
     const profiling = process.env.BENCH_PROFILE === "1" ? await startProfile(page) : null;
+    // BENCH_TRACE=<file>: a Chromium trace of the measured keystrokes (paint, raster, layers), for chrome://tracing or Perfetto.
+    const tracePath = process.env.BENCH_TRACE;
+    if (tracePath) await browser.startTracing(page, { path: tracePath, categories: TRACE_CATEGORIES });
     const s = summarise(await measureKeystrokes(page, field, KEYSTROKES));
+    if (tracePath) await browser.stopTracing();
     if (profiling) await profiling.stop(KEYSTROKES);
 
     console.log("| figure | value | target |");

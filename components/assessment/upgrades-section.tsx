@@ -1,7 +1,8 @@
 "use client";
 
+import { memo, useMemo } from "react";
 import { MEASURE_LIFE_YEARS } from "@/calc";
-import type { AssessmentUpgrade } from "@/lib/assessment/doc";
+import type { AssessmentDoc, AssessmentUpgrade } from "@/lib/assessment/doc";
 import { setAt, useAssessmentCtx } from "./context";
 import { NumField, TextField } from "./fields";
 import { PricingSummary, UpgradePricingPanel } from "./upgrade-pricing";
@@ -27,7 +28,10 @@ export function UpgradesSection() {
     list.splice(i + by, 0, u!);
     return { ...d, upgrades: list };
   });
-  const walls = doc.surfaces.filter((s) => s.kind === "wall");
+  // The walls' ids and names as one string, so the list (and its checkboxes) stays the same
+  // object while a keystroke changes a wall's area.
+  const wallsKey = doc.surfaces.filter((s) => s.kind === "wall").map((s) => `${s.id}\u0000${s.name}`).join("\u0001");
+  const walls = useMemo(() => (wallsKey ? wallsKey.split("\u0001").map((w) => { const [id, name] = w.split("\u0000"); return { id: id!, name: name! }; }) : []), [wallsKey]);
   return (
     <section aria-labelledby="upg-h" className="card space-y-4">
       <h2 id="upg-h" className="text-xl font-semibold text-spruce-800">Upgrades, in the order they are applied</h2>
@@ -43,26 +47,7 @@ export function UpgradesSection() {
               {u.type === "windows" ? <NumField path={`upgrades.${i}.uFactorIP`} label="New window U-factor" value={u.uFactorIP} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "uFactorIP"], n ?? Number.NaN))} /> : null}
               <NumField path={`upgrades.${i}.lifeYears`} label="Measure life (years)" value={u.lifeYears ?? null} onValue={(n) => update((d) => setAt(d, ["upgrades", i, "lifeYears"], n ?? undefined))} />
             </div>
-            {u.type === "dense-pack-walls" ? (
-              <fieldset className="mt-3">
-                <legend className="text-sm font-semibold">Walls to dense-pack</legend>
-                <div className="mt-1 flex flex-wrap gap-x-5 gap-y-2">
-                  {walls.map((w) => {
-                    const on = u.surfaceIds === "all-walls" || (Array.isArray(u.surfaceIds) && u.surfaceIds.includes(w.id));
-                    return (
-                      <label key={w.id} className="flex min-h-11 items-center gap-2">
-                        <input type="checkbox" className="h-5 w-5" checked={on} disabled={readOnly} onChange={(e) => update((d) => {
-                          const current = u.surfaceIds === "all-walls" ? walls.map((x) => x.id) : [...(u.surfaceIds as string[])];
-                          const next = e.target.checked ? [...current, w.id] : current.filter((x) => x !== w.id);
-                          return setAt(d, ["upgrades", i, "surfaceIds"], next.length === walls.length ? "all-walls" : next);
-                        })} />
-                        {w.name}
-                      </label>
-                    );
-                  })}
-                </div>
-              </fieldset>
-            ) : null}
+            {u.type === "dense-pack-walls" ? <DensePackWalls i={i} surfaceIds={u.surfaceIds} walls={walls} readOnly={readOnly} update={update} /> : null}
             {pricesVisible ? <UpgradePricingPanel i={i} price={pricing?.upgrades[i] ?? null} /> : null}
             {!readOnly ? (
               <div className="mt-2 flex flex-wrap gap-2">
@@ -85,3 +70,36 @@ export function UpgradesSection() {
     </section>
   );
 }
+
+type Wall = { id: string; name: string };
+type DensePackWallsProps = {
+  i: number;
+  surfaceIds: Extract<AssessmentUpgrade, { type: "dense-pack-walls" }>["surfaceIds"];
+  walls: Wall[];
+  readOnly: boolean;
+  update: (change: (d: AssessmentDoc) => AssessmentDoc) => void;
+};
+
+/** The walls a dense-pack upgrade covers: one checkbox per wall, re-rendered only when the walls or the choice change. */
+const DensePackWalls = memo(function DensePackWalls({ i, surfaceIds, walls, readOnly, update }: DensePackWallsProps) {
+  return (
+    <fieldset className="mt-3">
+      <legend className="text-sm font-semibold">Walls to dense-pack</legend>
+      <div className="mt-1 flex flex-wrap gap-x-5 gap-y-2">
+        {walls.map((w) => {
+          const on = surfaceIds === "all-walls" || (Array.isArray(surfaceIds) && surfaceIds.includes(w.id));
+          return (
+            <label key={w.id} className="flex min-h-11 items-center gap-2">
+              <input type="checkbox" className="h-5 w-5" checked={on} disabled={readOnly} onChange={(e) => update((d) => {
+                const current = surfaceIds === "all-walls" ? walls.map((x) => x.id) : [...(surfaceIds as string[])];
+                const next = e.target.checked ? [...current, w.id] : current.filter((x) => x !== w.id);
+                return setAt(d, ["upgrades", i, "surfaceIds"], next.length === walls.length ? "all-walls" : next);
+              })} />
+              {w.name}
+            </label>
+          );
+        })}
+      </div>
+    </fieldset>
+  );
+});

@@ -1,6 +1,6 @@
 "use client";
 
-import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
+import { memo, useCallback, useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { analyzeHouse, CalcInputError, type AssemblyDef, type HouseAnalysis } from "@/calc";
 import type { AssessmentDoc } from "@/lib/assessment/doc";
@@ -64,8 +64,8 @@ const sameUpgrades = (a: { upgrades: readonly { type?: string; upgradeId?: strin
 export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: string; initialUnits?: "ip" | "si" }) {
   const a = useAssessment(jobId);
   const { units, setUnits, error: unitsError } = useUnitPreference(initialUnits);
-  // The analysis, prices and reasons are worked out with each edit (a few ms), so the fields and
-  // the per-surface figures never trail the document; only the results panel is drawn deferred.
+  // The analysis, prices and reasons are worked out with each edit (a few ms), so the fields, the
+  // per-surface figures and the results panel never trail the document.
   const pricesVisible = a.loaded?.pricesVisible ?? false;
   const { data: book } = useSWR<PriceBookResponse>(pricesVisible ? priceBookKey : null, fetcher, { keepPreviousData: true });
   const items = useMemo(() => book?.items.filter((i) => i.active) ?? null, [book]);
@@ -90,10 +90,10 @@ export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: str
   // One function for the whole life of the page, so memoised rows can tell nothing else changed.
   const update = useCallback((change: (d: AssessmentDoc) => AssessmentDoc) => noteEdit(edit(change)), [edit]);
 
-  // The results panel (the heaviest part of the page: tables, the chart) renders after the
-  // keystroke's own frame, from the same analysis.
-  const computed = useMemo(() => (live && a.doc ? { live, doc: a.doc } : null), [live, a.doc]);
-  const shown = useDeferredValue(computed);
+  // The results panel renders in the same pass as the edited field: one render, one commit and
+  // one frame a keystroke. (Drawn deferred, it took a second render and two more frames, one for
+  // its text and one for the chart, which recharts updates from its effects.)
+  const shown = useMemo(() => (live && a.doc ? { live, doc: a.doc } : null), [live, a.doc]);
   // Keystroke → results painted (components/assessment/timings.ts), for the browser test and the bench.
   useEffect(() => {
     if (shown) noteResults(shown.doc);

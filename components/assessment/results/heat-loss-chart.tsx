@@ -1,5 +1,6 @@
 "use client";
 
+import { memo, useMemo } from "react";
 import { Bar, BarChart, CartesianGrid, Legend, Tooltip, XAxis, YAxis } from "recharts";
 import { num } from "./format";
 
@@ -10,25 +11,37 @@ const BEFORE = "#b9521e";
 const AFTER = "#1f5444";
 const INK = "#4b5157";
 
+// Props that never change are module constants, and the chart's parts are made once per unit
+// system: recharts re-registers an axis, bar or legend in its store every time that element
+// re-renders, so on a keystroke only the data should reach it.
+const MARGIN = { top: 4, right: 12, bottom: 4, left: 4 };
+const TICK = { fill: INK, fontSize: 12 };
+const LEGEND_STYLE = { fontSize: 13, color: INK };
+
+const sameRows = (a: HeatLossRow[], b: HeatLossRow[]) =>
+  a === b || (a.length === b.length && a.every((r, i) => r.component === b[i]!.component && r.before === b[i]!.before && r.after === b[i]!.after));
+
 /** Horizontal bars (they fit a narrow column): heat loss by component, before and after. */
-export default function HeatLossChart({ rows, unit, digits }: { rows: HeatLossRow[]; unit: string; digits: number }) {
-  const value = (v: unknown) => `${num(Number(v), digits)} ${unit}`;
+function HeatLossChart({ rows, unit, digits }: { rows: HeatLossRow[]; unit: string; digits: number }) {
+  const parts = useMemo(() => {
+    const value = (v: unknown) => `${num(Number(v), digits)} ${unit}`;
+    return [
+      <CartesianGrid key="grid" horizontal={false} stroke="#ddd5c8" />,
+      <XAxis key="x" type="number" tick={TICK} tickFormatter={(v: number) => num(v, digits)} />,
+      <YAxis key="y" type="category" dataKey="component" width={84} tick={TICK} />,
+      <Tooltip key="tip" formatter={value} />,
+      <Legend key="legend" itemSorter={null} wrapperStyle={LEGEND_STYLE} />,
+      <Bar key="before" dataKey="before" name="Before" fill={BEFORE} isAnimationActive={false} />,
+      <Bar key="after" dataKey="after" name="After" fill={AFTER} isAnimationActive={false} />,
+    ];
+  }, [unit, digits]);
+  const style = useMemo(() => ({ width: "100%", height: 56 + rows.length * 44 }), [rows.length]);
   return (
-    <BarChart
-      layout="vertical"
-      data={rows}
-      responsive
-      style={{ width: "100%", height: 56 + rows.length * 44 }}
-      margin={{ top: 4, right: 12, bottom: 4, left: 4 }}
-      barGap={2}
-    >
-      <CartesianGrid horizontal={false} stroke="#ddd5c8" />
-      <XAxis type="number" tick={{ fill: INK, fontSize: 12 }} tickFormatter={(v: number) => num(v, digits)} />
-      <YAxis type="category" dataKey="component" width={84} tick={{ fill: INK, fontSize: 12 }} />
-      <Tooltip formatter={value} />
-      <Legend itemSorter={null} wrapperStyle={{ fontSize: 13, color: INK }} />
-      <Bar dataKey="before" name="Before" fill={BEFORE} isAnimationActive={false} />
-      <Bar dataKey="after" name="After" fill={AFTER} isAnimationActive={false} />
+    <BarChart layout="vertical" data={rows} responsive style={style} margin={MARGIN} barGap={2}>
+      {parts}
     </BarChart>
   );
 }
+
+// Same figures (a price or a name changed, not the heat loss): the chart is left as it is.
+export default memo(HeatLossChart, (a, b) => a.unit === b.unit && a.digits === b.digits && sameRows(a.rows, b.rows));
