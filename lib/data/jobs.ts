@@ -83,7 +83,8 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
       street: houses.street,
       city: houses.city,
       auditorName: users.name,
-      updatedAt: jobs.updatedAt,
+      // milliseconds as stored: the list sends numbers, so no Date is made and taken apart per row
+      updatedAt: sql<number>`${jobs.updatedAt}`,
     })
     .from(jobs)
     .innerJoin(clients, eq(clients.id, jobs.clientId))
@@ -157,7 +158,9 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
   }
   return {
     total,
-    jobs: rows.map(({ street, city, updatedAt, ...r }): JobListRow => ({ ...r, address: `${street}, ${city}`, updatedAt: updatedAt.getTime() })),
+    jobs: rows.map(
+      (r): JobListRow => ({ id: r.id, number: r.number, title: r.title, stage: r.stage, clientName: r.clientName, address: `${r.street}, ${r.city}`, auditorName: r.auditorName, updatedAt: r.updatedAt }),
+    ),
   };
 }
 

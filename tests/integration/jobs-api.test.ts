@@ -13,7 +13,7 @@ const { createJobAction } = await import("@/app/(office)/jobs/new/actions");
 
 const ctx = seededDbForFile();
 
-type ListBody = { jobs: { number: number; clientName: string; stage: string; id: string }[]; total: number; page: number };
+type ListBody = { jobs: { number: number; clientName: string; stage: string; id: string; updatedAt: number }[]; total: number; page: number };
 const list = (qs: string) => call<ListBody>(jobsRoute.GET as never, { path: `/api/jobs?${qs}` });
 
 describe("GET /api/jobs", () => {
@@ -23,6 +23,10 @@ describe("GET /api/jobs", () => {
     expect(r.status).toBe(200);
     expect(r.json.total).toBe(8);
     expect(r.json.jobs.map((j) => j.number)).toContain(1006);
+    // newest change first, as milliseconds since 1970
+    const times = r.json.jobs.map((j) => j.updatedAt);
+    expect(times.every((t) => Number.isInteger(t) && t > Date.UTC(2020, 0, 1))).toBe(true);
+    expect(times).toEqual([...times].sort((a, b) => b - a));
   });
 
   it("searches by client name, street and job number", async () => {
