@@ -18,7 +18,8 @@ export type FrameProps = { companyName: string; documentTitle: string; children:
  * out once and packed into pages, where the default engine laid the whole page out again at each
  * page break and once more per page for the page numbers (about a fifth of a report's render).
  * The frame comes first among the children: fixed, absolutely placed nodes at the start of the
- * page repeat on every page it runs to.
+ * page repeat on every page it runs to. "Page N of M" still costs the engine a second round of
+ * pagination (it needs the page count), about an eighth of a render.
  */
 export function ReportPage({ companyName, documentTitle, children, wrap = true }: FrameProps) {
   return (
