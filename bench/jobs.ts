@@ -5,7 +5,7 @@
 // Needs `npm run build` first. Prints figures; never fails.
 import autocannon from "autocannon";
 import { spawn } from "node:child_process";
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { createDb } from "@/db";
@@ -64,17 +64,41 @@ async function sessionCookie(email: string) {
   return session.split(";")[0]!;
 }
 
-type Figures = { path: string; rps: number; p50: number; p95: number; p99: number; errors: number };
+type Figures = { path: string; rps: number; p50: number; p95: number; p99: number; errors: number; cpuMs: number };
+
+/**
+ * CPU time (user + system, ms) used so far by a process and its children (`next start` serves
+ * from a child process). Less sensitive than throughput to other work on a shared machine.
+ */
+function processTreeCpuMs(rootPid: number | undefined): number {
+  if (rootPid === undefined) return NaN;
+  const tick = 1000 / 100; // USER_HZ
+  let total = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const fields = readFileSync(`/proc/${entry}/stat`, "utf8").split(") ")[1]!.split(" ");
+      if (Number(entry) === rootPid || Number(fields[1]) === rootPid) total += (Number(fields[11]) + Number(fields[12])) * tick;
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return total;
+}
+
+let serverPid: number | undefined;
 
 async function load(pathAndQuery: string, cookie?: string, connections = 8): Promise<Figures> {
   const latencies: number[] = [];
+  const cpuBefore = processTreeCpuMs(serverPid);
   const instance = autocannon({ url: `${base}${pathAndQuery}`, connections, duration: 6, headers: cookie ? { cookie } : {} });
   // autocannon's run object is both a promise of the result and an event emitter of each response.
   (instance as unknown as NodeJS.EventEmitter).on("response", (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
   const result = await instance;
+  const cpuMs = (processTreeCpuMs(serverPid) - cpuBefore) / result.requests.total;
   latencies.sort((a, b) => a - b);
   const at = (p: number) => latencies[Math.min(latencies.length - 1, Math.floor(p * latencies.length))] ?? NaN;
-  return { path: pathAndQuery, rps: result.requests.average, p50: at(0.5), p95: at(0.95), p99: at(0.99), errors: result.non2xx + result.errors };
+  return { path: pathAndQuery, rps: result.requests.average, p50: at(0.5), p95: at(0.95), p99: at(0.99), errors: result.non2xx + result.errors, cpuMs };
 }
 
 export async function runJobsBench() {
@@ -89,20 +113,27 @@ export async function runJobsBench() {
     env: { ...process.env, NODE_ENV: "production", DATABASE_URL: url, AUTH_SECRET: "bench-secret-0123456789abcdef0123", AUTH_TRUST_HOST: "true", NEXT_TELEMETRY_DISABLED: "1" },
     stdio: "ignore",
   });
+  serverPid = server.pid;
   try {
     await waitForServer(`${base}/api/health`);
     const cookie = await sessionCookie("owner@kestrelbay.example");
     await load("/api/health"); // warm-up
     await load("/api/jobs", cookie);
-    const trivial = await load("/api/health");
+    const trivialBefore = await load("/api/health");
     const jobsPaths = ["/api/jobs", "/api/jobs?q=Famnamef31", "/api/jobs?q=Dovecote", "/api/jobs?stage=installing"];
-    const rows = [trivial];
-    for (const p of jobsPaths) rows.push(await load(p, cookie));
+    const measured: Figures[] = [];
+    for (const p of jobsPaths) measured.push(await load(p, cookie));
+    // The trivial route before and after the others, averaged, so a change in the machine's load
+    // during the run weighs on both sides of each ratio alike.
+    const trivialAfter = await load("/api/health");
+    const trivial: Figures = { ...trivialBefore, rps: (trivialBefore.rps + trivialAfter.rps) / 2, cpuMs: (trivialBefore.cpuMs + trivialAfter.cpuMs) / 2, p50: Math.max(trivialBefore.p50, trivialAfter.p50), p95: Math.max(trivialBefore.p95, trivialAfter.p95), p99: Math.max(trivialBefore.p99, trivialAfter.p99), errors: trivialBefore.errors + trivialAfter.errors };
+    const rows = [trivial, ...measured];
     console.log("Throughput: 8 connections, the server saturated (latency here is mostly queueing: 8 requests wait on one event loop).");
-    console.log("| route | req/s | p50 ms | p95 ms | p99 ms | non-2xx | throughput vs trivial |");
-    console.log("| --- | --- | --- | --- | --- | --- | --- |");
+    console.log("Server CPU per request is the server's own CPU time over the run divided by the requests answered; the trivial route's over a route's is what its throughput ratio would be on an otherwise idle machine.");
+    console.log("| route | req/s | p50 ms | p95 ms | p99 ms | non-2xx | throughput vs trivial | server CPU ms/request | CPU vs trivial |");
+    console.log("| --- | --- | --- | --- | --- | --- | --- | --- | --- |");
     for (const r of rows) {
-      console.log(`| ${r.path} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(1)} | ${r.p95.toFixed(1)} | ${r.p99.toFixed(1)} | ${r.errors} | ${(r.rps / trivial.rps).toFixed(2)} |`);
+      console.log(`| ${r.path} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(1)} | ${r.p95.toFixed(1)} | ${r.p99.toFixed(1)} | ${r.errors} | ${(r.rps / trivial.rps).toFixed(2)} | ${r.cpuMs.toFixed(2)} | ${(trivial.cpuMs / r.cpuMs).toFixed(2)} |`);
     }
     // The latency one user sees: one request at a time, nothing queued ahead of it.
     const single = [await load("/api/health", undefined, 1)];
