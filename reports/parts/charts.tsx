@@ -1,7 +1,7 @@
 // Vector charts for the PDF, drawn with React-PDF's own Svg primitives (recharts needs a DOM).
 // Each chart takes plain numbers and draws its labels in the report's body face.
 import type { ComponentType, ReactNode } from "react";
-import { Line, Path, Polyline, Rect, Svg, Text, View } from "@react-pdf/renderer";
+import { Line, Path, Polyline, Rect, Svg, Text, Tspan, View } from "@react-pdf/renderer";
 import { BODY } from "./fonts";
 import { AFTER, BEFORE, colors } from "./theme";
 import { pdfText } from "./text";
@@ -14,6 +14,21 @@ type SvgTextProps = {
 const SvgTextBase = Text as unknown as ComponentType<SvgTextProps>;
 function Label({ children, size = 8, weight = 400, ...p }: Omit<SvgTextProps, "children" | "fontSize" | "fontWeight" | "fontFamily"> & { children: string; size?: number; weight?: number }) {
   return <SvgTextBase fontFamily={BODY} fontSize={size} fontWeight={weight} fill={p.fill ?? colors.muted} {...p}>{pdfText(children)}</SvgTextBase>;
+}
+
+type Anchor = "start" | "middle" | "end";
+const TspanBase = Tspan as unknown as ComponentType<{ x: number; y: number; textAnchor: Anchor; children: string }>;
+/**
+ * Labels that share a size, weight, colour and anchor (an axis's ticks, a series' values): one
+ * text element with a positioned span per label, drawn as separate labels would be.
+ */
+function Labels({ items, size = 8, weight = 400, fill = colors.muted, anchor = "start" }: { items: { x: number; y: number; text: string }[]; size?: number; weight?: number; fill?: string; anchor?: Anchor }) {
+  if (items.length === 0) return null;
+  return (
+    <SvgTextBase fontFamily={BODY} fontSize={size} fontWeight={weight} fill={fill} x={items[0].x} y={items[0].y} textAnchor={anchor}>
+      {items.map((l, i) => <TspanBase key={i} x={l.x} y={l.y} textAnchor={anchor}>{pdfText(l.text)}</TspanBase>)}
+    </SvgTextBase>
+  );
 }
 
 /** A round step for an axis: 1, 2 or 5 × 10^n, giving about `count` ticks up to `max`. */
@@ -78,17 +93,12 @@ export function PairedBars({ rows, width, format, labelWidth = 74 }: { rows: Pai
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
       <Path d={grid} stroke={colors.line} strokeWidth={0.5} />
-      {axis.map((t) => <Label key={t} x={x(t)} y={height - 4} textAnchor="middle" size={7}>{format(t)}</Label>)}
+      <Labels items={axis.map((t) => ({ x: x(t), y: height - 4, text: format(t) }))} anchor="middle" size={7} />
       <Path d={bars((r) => r.before, 0)} fill={BEFORE} />
       <Path d={bars((r) => r.after, bar + gap)} fill={AFTER} />
-      {rows.map((r, i) => {
-        const y0 = i * rowH + 4;
-        return [
-          <Label key={`${r.label}-l`} x={labelWidth - 6} y={y0 + bar + 3} textAnchor="end" size={8.5} fill={colors.charcoal}>{r.label}</Label>,
-          <Label key={`${r.label}-b`} x={x(r.before) + 3} y={y0 + bar - 1.5} size={7.5}>{format(r.before)}</Label>,
-          <Label key={`${r.label}-a`} x={x(r.after) + 3} y={y0 + 2 * bar + gap - 1.5} size={7.5} fill={colors.spruce800} weight={600}>{format(r.after)}</Label>,
-        ];
-      })}
+      <Labels items={rows.map((r, i) => ({ x: labelWidth - 6, y: i * rowH + 4 + bar + 3, text: r.label }))} anchor="end" size={8.5} fill={colors.charcoal} />
+      <Labels items={rows.map((r, i) => ({ x: x(r.before) + 3, y: i * rowH + 4 + bar - 1.5, text: format(r.before) }))} size={7.5} />
+      <Labels items={rows.map((r, i) => ({ x: x(r.after) + 3, y: i * rowH + 4 + 2 * bar + gap - 1.5, text: format(r.after) }))} size={7.5} fill={colors.spruce800} weight={600} />
       <Line x1={labelWidth} y1={0} x2={labelWidth} y2={height - 14} stroke={colors.charcoal} strokeWidth={0.75} />
     </Svg>
   );
@@ -121,12 +131,17 @@ export function Columns({ columns, width, height = 150, format }: { columns: Col
       {tones.map((tone) => (
         <Path key={tone} d={geometry.filter((g) => g.c.tone === tone).map((g) => rectPath(g.cx - barW / 2, top + plotH - g.h, barW, Math.max(0.5, g.h))).join("")} fill={fill(tone)} />
       ))}
-      {geometry.map(({ c, h, cx, lines }, i) => [
-        <Label key={`${i}-v`} x={cx} y={top + plotH - h - 4} textAnchor="middle" size={8.5} weight={700} fill={c.tone === "before" ? colors.ember700 : colors.spruce800}>{format(c.value)}</Label>,
-        ...lines.map((l, li) => (
-          <Label key={`${i}-${li}`} x={cx} y={top + plotH + 11 + li * 9} textAnchor="middle" size={7.5} fill={colors.charcoal}>{l}</Label>
-        )),
-      ])}
+      {[colors.ember700, colors.spruce800].map((color) => (
+        <Labels
+          key={color}
+          items={geometry.filter(({ c }) => (c.tone === "before" ? colors.ember700 : colors.spruce800) === color).map(({ c, h, cx }) => ({ x: cx, y: top + plotH - h - 4, text: format(c.value) }))}
+          anchor="middle"
+          size={8.5}
+          weight={700}
+          fill={color}
+        />
+      ))}
+      <Labels items={geometry.flatMap(({ cx, lines }) => lines.map((l, li) => ({ x: cx, y: top + plotH + 11 + li * 9, text: l })))} anchor="middle" size={7.5} fill={colors.charcoal} />
     </Svg>
   );
 }
@@ -151,10 +166,8 @@ export function CumulativeChart({ points, cost, width, height = 170, format }: {
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
       <Path d={axis.map((t) => `M${left} ${y(t)}H${left + plotW}`).join("")} stroke={colors.line} strokeWidth={0.5} />
-      {axis.map((t) => <Label key={`y${t}`} x={left - 4} y={y(t) + 2.5} textAnchor="end" size={7}>{format(t)}</Label>)}
-      {yearTicks.map((t) => (
-        <Label key={t} x={x(t)} y={top + plotH + 10} textAnchor="middle" size={7}>{String(t)}</Label>
-      ))}
+      <Labels items={axis.map((t) => ({ x: left - 4, y: y(t) + 2.5, text: format(t) }))} anchor="end" size={7} />
+      <Labels items={yearTicks.map((t) => ({ x: x(t), y: top + plotH + 10, text: String(t) }))} anchor="middle" size={7} />
       <Label x={left + plotW} y={height - 2} textAnchor="end" size={7}>years after the work</Label>
       <Line x1={left} y1={top + plotH} x2={left + plotW} y2={top + plotH} stroke={colors.charcoal} strokeWidth={0.75} />
       <Line x1={left} y1={y(cost)} x2={left + plotW} y2={y(cost)} stroke={BEFORE} strokeWidth={1.5} strokeDasharray="4 3" />
