@@ -32,7 +32,7 @@ export function HouseSection() {
   }
 
   return (
-    <section aria-labelledby="house-h" className="card space-y-5">
+    <section aria-labelledby="house-h" className="card isolate space-y-5">
       <h2 id="house-h" className="text-xl font-semibold text-spruce-800">House</h2>
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         <NumField path="house.yearBuilt" label="Year built" value={h.yearBuilt} onValue={(n) => set(["house", "yearBuilt"], n ?? Number.NaN)} />

@@ -10,7 +10,7 @@ export function LeakageSection() {
   const tests = doc.leakage.tests;
   const v = doc.house.volumeFt3;
   return (
-    <section aria-labelledby="leak-h" className="card space-y-4">
+    <section aria-labelledby="leak-h" className="card isolate space-y-4">
       <h2 id="leak-h" className="text-xl font-semibold text-spruce-800">Air leakage</h2>
       <ol className="space-y-3">
         {tests.map((t, i) => (

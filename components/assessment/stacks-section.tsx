@@ -17,7 +17,7 @@ export function StacksSection({ companyLibrary }: { companyLibrary: AssemblyDef[
     setEditing(key);
   };
   return (
-    <section aria-labelledby="stacks-h" className="card space-y-4">
+    <section aria-labelledby="stacks-h" className="card isolate space-y-4">
       <h2 id="stacks-h" className="text-xl font-semibold text-spruce-800">Layer stacks</h2>
       <p className="text-sm text-ink-muted">Built-in stacks are used as they are. Clone one to change it for this house; surfaces then pick it by name.</p>
       {own.length ? (

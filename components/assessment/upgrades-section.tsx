@@ -33,7 +33,7 @@ export function UpgradesSection() {
   const wallsKey = doc.surfaces.filter((s) => s.kind === "wall").map((s) => `${s.id}\u0000${s.name}`).join("\u0001");
   const walls = useMemo(() => (wallsKey ? wallsKey.split("\u0001").map((w) => { const [id, name] = w.split("\u0000"); return { id: id!, name: name! }; }) : []), [wallsKey]);
   return (
-    <section aria-labelledby="upg-h" className="card space-y-4">
+    <section aria-labelledby="upg-h" className="card isolate space-y-4">
       <h2 id="upg-h" className="text-xl font-semibold text-spruce-800">Upgrades, in the order they are applied</h2>
       <p className="text-sm text-ink-muted">Each saving is worked out on the house with the upgrades above it already done, so the package is not counted twice.{pricesVisible ? " Each cost is priced from your price book; change a line for this job where the house needs it." : ""}</p>
       <ol className="space-y-3">

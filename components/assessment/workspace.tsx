@@ -129,6 +129,9 @@ export function AssessmentWorkspace({ jobId, initialUnits = "ip" }: { jobId: str
         </fieldset>
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_28rem]">
+        {/* The house, stacks, leakage and upgrades cards are each their own paint layer (`isolate`), so a
+            keystroke repaints the card it changed, not the page around it. The surfaces card is not: its
+            undo bar is fixed to the window and must stay above the cards after it. */}
         <div className="min-w-0 space-y-6">
           <SectionGate ctx={ctx} deps={deps.house}><House /></SectionGate>
           <SectionGate ctx={ctx} deps={deps.surfaces}><Surfaces /></SectionGate>
