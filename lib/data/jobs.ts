@@ -73,35 +73,67 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
   if (search !== "none") conditions.push(matchesSearch(search));
   const where = and(...conditions);
   const order = query.dir === "asc" ? asc(sortColumns[query.sort]) : desc(sortColumns[query.sort]);
-  const select = db
-    .select({
-      id: jobs.id,
-      number: jobs.number,
-      title: jobs.title,
-      stage: jobs.stage,
-      clientName: clients.name,
-      street: houses.street,
-      city: houses.city,
-      auditorName: users.name,
-      // milliseconds as stored: the list sends numbers, so no Date is made and taken apart per row
-      updatedAt: sql<number>`${jobs.updatedAt}`,
-    })
-    .from(jobs)
-    .innerJoin(clients, eq(clients.id, jobs.clientId))
-    .innerJoin(houses, eq(houses.id, jobs.houseId))
-    .leftJoin(users, eq(users.id, jobs.auditorId));
+  const listFields = {
+    id: jobs.id,
+    number: jobs.number,
+    title: jobs.title,
+    stage: jobs.stage,
+    clientName: clients.name,
+    street: houses.street,
+    city: houses.city,
+    auditorName: users.name,
+    // milliseconds as stored: the list sends numbers, so no Date is made and taken apart per row
+    updatedAt: sql<number>`${jobs.updatedAt}`,
+  };
   const limit = sql.placeholder("limit");
   const offset = sql.placeholder("offset");
-  // Driven from a search's few matches and sorted by a column of jobs: pick the page's jobs first
-  // and join only those, rather than joining every match and then sorting.
+  // Every match counted in the same pass that picks the page (a window over all the matches).
+  const total = sql<number>`count(*) over ()`;
+  // Driven from a search's few matches and sorted by a column of jobs: pick the page's jobs (and
+  // count the matches) first, then join only those, rather than joining every match and sorting.
   const pageFirst = drive === "matches" && query.sort !== "client";
+  const page = db
+    .select({ rowid: sql<number>`${jobs}.rowid`.as("page_rowid"), total: total.as("page_total") })
+    .from(jobs)
+    .where(where)
+    .orderBy(order, desc(jobs.number))
+    .limit(limit)
+    .offset(offset)
+    .as("page");
   return {
-    list: pageFirst
-      ? select
-          .where(inArray(sql`${jobs}.rowid`, db.select({ rowid: sql`${jobs}.rowid` }).from(jobs).where(where).orderBy(order, desc(jobs.number)).limit(limit).offset(offset)))
+    list: db
+      .select(listFields)
+      .from(jobs)
+      .innerJoin(clients, eq(clients.id, jobs.clientId))
+      .innerJoin(houses, eq(houses.id, jobs.houseId))
+      .leftJoin(users, eq(users.id, jobs.auditorId))
+      .where(where)
+      .orderBy(order, desc(jobs.number))
+      .limit(limit)
+      .offset(offset)
+      .prepare(),
+    /** A page of the matches with, on every row, how many there are in all. */
+    listWithTotal: pageFirst
+      ? db
+          .select({ ...listFields, total: page.total })
+          .from(page)
+          .innerJoin(jobs, eq(sql`${jobs}.rowid`, page.rowid))
+          .innerJoin(clients, eq(clients.id, jobs.clientId))
+          .innerJoin(houses, eq(houses.id, jobs.houseId))
+          .leftJoin(users, eq(users.id, jobs.auditorId))
           .orderBy(order, desc(jobs.number))
           .prepare()
-      : select.where(where).orderBy(order, desc(jobs.number)).limit(limit).offset(offset).prepare(),
+      : db
+          .select({ ...listFields, total })
+          .from(jobs)
+          .innerJoin(clients, eq(clients.id, jobs.clientId))
+          .innerJoin(houses, eq(houses.id, jobs.houseId))
+          .leftJoin(users, eq(users.id, jobs.auditorId))
+          .where(where)
+          .orderBy(order, desc(jobs.number))
+          .limit(limit)
+          .offset(offset)
+          .prepare(),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
     // A word search's matches in every company: an upper bound, from the word index alone.
@@ -150,11 +182,21 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
     else if (seesWholeCompany(user.role)) total = Number((await st.companyTotal.execute(params))[0]?.total ?? 0);
     else total = (await st.count.execute(params))[0]!.total;
   } else {
-    // Count the matches first, from the matches; then list from wherever is cheaper.
     const fromMatches = listStatements(db, user.role, query, search.kind, "matches");
-    total = await countMatches(fromMatches, user, query, search, params);
-    if (total === 0) rows = [];
-    else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.execute(params);
+    // A word search first asks the word index how many jobs match in every company (cheap, and
+    // at least the user's own count). None: done. Few: one statement pages and counts them.
+    const everywhere = search.kind === "words" ? Number((await fromMatches.wordMatches.execute({ term: search.term }))[0]?.total ?? 0) : undefined;
+    if (everywhere === 0) return { total: 0, jobs: [] };
+    if (everywhere !== undefined && everywhere <= FEW_MATCHES) {
+      const paged = await fromMatches.listWithTotal.execute(params);
+      rows = paged;
+      total = paged[0]?.total ?? (query.page === 1 ? 0 : (await fromMatches.count.execute(params))[0]!.total);
+    } else {
+      // Count the matches first; then list from wherever is cheaper.
+      total = await countMatches(fromMatches, user, query, search, params);
+      if (total === 0) rows = [];
+      else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.execute(params);
+    }
   }
   return {
     total,
@@ -165,16 +207,14 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
 }
 
 /**
- * How many of the user's jobs a search matches. A word search by a role that sees the whole
- * company counts inside the word index: first every company's matches (cheap); when they are few,
- * checking each one's job row is cheapest; when many, the index counts the company's own through
- * its scope tokens (migration 0008) without reading a job row.
+ * How many of the user's jobs a search matches, when the word index found many or the search is
+ * not by words. A word search by a role that sees the whole company, with no stage, counts inside
+ * the word index through its scope tokens (migration 0008) without reading a job row; any other
+ * search counts its matching job rows.
  */
 async function countMatches(st: ReturnType<typeof buildListStatements>, user: AuthUser, query: JobListQuery, search: Search, params: Record<string, unknown>) {
   if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
-    const everywhere = Number((await st.wordMatches.execute({ term: search.term }))[0]?.total ?? 0);
-    if (everywhere === 0) return 0;
-    if (everywhere > FEW_MATCHES) return Number((await st.companyWordCount.execute({ scopedTerm: `scope : "${companyToken(user.companyId)}" AND ${search.term}` }))[0]?.total ?? 0);
+    return Number((await st.companyWordCount.execute({ scopedTerm: `scope : "${companyToken(user.companyId)}" AND ${search.term}` }))[0]?.total ?? 0);
   }
   return (await st.count.execute(params))[0]!.total;
 }

@@ -74,5 +74,15 @@ describe("searches matching many jobs", () => {
     expect(stageSorted.json.jobs).toEqual(all.json.jobs.slice(4, 8));
     const stages = all.json.jobs.map((j) => j.stage);
     expect(stages).toEqual([...stages].sort());
+    // sorted by client (joined before paging), and a page past the end still says how many there are
+    const byClient = await list("q=quillon 12&sort=client&dir=desc&pageSize=3");
+    expect(byClient.json.jobs.map((j) => j.title)).toEqual(["Quillon job 129", "Quillon job 128", "Quillon job 127"]);
+    expect(byClient.json.total).toBe(11);
+    const past = await list("q=quillon 12&page=5");
+    expect(past.json.jobs).toEqual([]);
+    expect(past.json.total).toBe(11);
+    // an installer's few matches are their assigned jobs only
+    actAs(ids.installer);
+    expect((await list("q=quillon 12")).json).toMatchObject({ jobs: [], total: 0 });
   });
 });
