@@ -134,6 +134,18 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
           .limit(limit)
           .offset(offset)
           .prepare(),
+    /** A page with, on every row, the company's word-index count (see companyWordCount), in one statement. */
+    listWithCompanyWordCount: db
+      .select({ ...listFields, total: sql<number>`(select count(*) from job_words where job_words match ${sql.placeholder("scopedTerm")})` })
+      .from(jobs)
+      .innerJoin(clients, eq(clients.id, jobs.clientId))
+      .innerJoin(houses, eq(houses.id, jobs.houseId))
+      .leftJoin(users, eq(users.id, jobs.auditorId))
+      .where(where)
+      .orderBy(order, desc(jobs.number))
+      .limit(limit)
+      .offset(offset)
+      .prepare(),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
     // A word search's matches in every company: an upper bound, from the word index alone.
@@ -191,6 +203,13 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
       const paged = await fromMatches.listWithTotal.execute(params);
       rows = paged;
       total = paged[0]?.total ?? (query.page === 1 ? 0 : (await fromMatches.count.execute(params))[0]!.total);
+    } else if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
+      // Many matches, and the user sees the whole company: the page, from the company's index in
+      // its order, carries the word index's count of the company's matches.
+      const scopedTerm = `scope : "${companyToken(user.companyId)}" AND ${search.term}`;
+      const paged = await listStatements(db, user.role, query, search.kind, "index").listWithCompanyWordCount.execute({ ...params, scopedTerm });
+      rows = paged;
+      total = paged.length ? Number(paged[0]!.total) : await countMatches(fromMatches, user, query, search, params);
     } else {
       // Count the matches first; then list from wherever is cheaper.
       total = await countMatches(fromMatches, user, query, search, params);
