@@ -1,9 +1,9 @@
-import { NextResponse } from "next/server";
 import { ZodError } from "zod";
 import { ApiError, validationError } from "./errors";
 
-export function json<T>(body: T, init?: number | ResponseInit) {
-  return NextResponse.json(body, typeof init === "number" ? { status: init } : init);
+/** A JSON response. The web platform's own `Response.json`: no response sets cookies, so Next's wrapper would only add work. */
+export function json<T>(body: T, init?: number | ResponseInit): Response {
+  return Response.json(body, typeof init === "number" ? { status: init } : init);
 }
 
 /** Turns any thrown error into the API's JSON shape `{ error, fields? }`; unknown errors are logged as 500. */
