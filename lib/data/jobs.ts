@@ -57,6 +57,21 @@ function matchesSearch(kind: Exclude<SearchKind, "none">) {
 /** A company's token in the word index's `scope` column (migration 0008). */
 const companyToken = (companyId: string) => `c${companyId.replace(/[^0-9a-z]/gi, "")}`;
 
+// The list statements select these columns in this order (listFields in buildListStatements),
+// and some add the matches' total after them. Rows are read by position, as SQLite returns them:
+// every one is a plain text or integer, so Drizzle's per-row mapping would change nothing.
+const [ID, NUMBER, TITLE, STAGE, CLIENT, STREET, CITY, AUDITOR, UPDATED, TOTAL] = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9] as const;
+const listRow = (r: ArrayLike<unknown>): JobListRow => ({
+  id: r[ID] as string,
+  number: r[NUMBER] as number,
+  title: r[TITLE] as string,
+  stage: r[STAGE] as JobStage,
+  clientName: r[CLIENT] as string,
+  address: `${r[STREET] as string}, ${r[CITY] as string}`,
+  auditorName: r[AUDITOR] as string | null,
+  updatedAt: r[UPDATED] as number,
+});
+
 /**
  * How a list query is driven. "index": walk the company's jobs in the sort order (best for no
  * search or a search matching many jobs). "matches": start from the search's matches and sort
@@ -185,11 +200,11 @@ export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ j
 async function runList(user: AuthUser, query: JobListQuery, search: Search) {
   const db = getDb();
   const params = { ...scopeParams(user), stage: query.stage, term: search.term, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
-  let rows: Awaited<ReturnType<ReturnType<typeof buildListStatements>["list"]["execute"]>>;
+  let rows: ArrayLike<unknown>[];
   let total: number;
   if (search.kind === "none") {
     const st = listStatements(db, user.role, query, "none", "index");
-    rows = await st.list.execute(params);
+    rows = await st.list.values(params);
     if (query.page === 1 && rows.length < query.pageSize) total = rows.length; // a first page that is not full is the whole list
     else if (seesWholeCompany(user.role)) total = Number((await st.companyTotal.execute(params))[0]?.total ?? 0);
     else total = (await st.count.execute(params))[0]!.total;
@@ -200,28 +215,24 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
     const everywhere = search.kind === "words" ? Number((await fromMatches.wordMatches.execute({ term: search.term }))[0]?.total ?? 0) : undefined;
     if (everywhere === 0) return { total: 0, jobs: [] };
     if (everywhere !== undefined && everywhere <= FEW_MATCHES) {
-      const paged = await fromMatches.listWithTotal.execute(params);
-      rows = paged;
-      total = paged[0]?.total ?? (query.page === 1 ? 0 : (await fromMatches.count.execute(params))[0]!.total);
+      rows = await fromMatches.listWithTotal.values(params);
+      total = rows.length ? Number(rows[0]![TOTAL]) : query.page === 1 ? 0 : (await fromMatches.count.execute(params))[0]!.total;
     } else if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
       // Many matches, and the user sees the whole company: the page, from the company's index in
       // its order, carries the word index's count of the company's matches.
       const scopedTerm = `scope : "${companyToken(user.companyId)}" AND ${search.term}`;
-      const paged = await listStatements(db, user.role, query, search.kind, "index").listWithCompanyWordCount.execute({ ...params, scopedTerm });
-      rows = paged;
-      total = paged.length ? Number(paged[0]!.total) : await countMatches(fromMatches, user, query, search, params);
+      rows = await listStatements(db, user.role, query, search.kind, "index").listWithCompanyWordCount.values({ ...params, scopedTerm });
+      total = rows.length ? Number(rows[0]![TOTAL]) : await countMatches(fromMatches, user, query, search, params);
     } else {
       // Count the matches first; then list from wherever is cheaper.
       total = await countMatches(fromMatches, user, query, search, params);
       if (total === 0) rows = [];
-      else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.execute(params);
+      else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.values(params);
     }
   }
   return {
     total,
-    jobs: rows.map(
-      (r): JobListRow => ({ id: r.id, number: r.number, title: r.title, stage: r.stage, clientName: r.clientName, address: `${r.street}, ${r.city}`, auditorName: r.auditorName, updatedAt: r.updatedAt }),
-    ),
+    jobs: rows.map(listRow),
   };
 }
 

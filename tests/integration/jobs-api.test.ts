@@ -29,6 +29,22 @@ describe("GET /api/jobs", () => {
     expect(times).toEqual([...times].sort((a, b) => b - a));
   });
 
+  it("gives each row the job's own facts, field by field, on every kind of list", async () => {
+    actAs(ids.owner);
+    const detail = (await call(jobRoute.GET as never, { params: { id: ids.demoJob } })).json.job as {
+      id: string; number: number; title: string; stage: string; updatedAt: string; client: { name: string }; house: { street: string; city: string }; auditor: { name: string } | null;
+    };
+    const expected = {
+      id: detail.id, number: detail.number, title: detail.title, stage: detail.stage, clientName: detail.client.name,
+      address: `${detail.house.street}, ${detail.house.city}`, auditorName: detail.auditor?.name ?? null, updatedAt: new Date(detail.updatedAt).getTime(),
+    };
+    expect(expected.auditorName).not.toBeNull();
+    for (const qs of ["", `q=${detail.number}`, "q=tansy", `stage=${detail.stage}`, "q=ansyfie", "sort=client&q=road"]) {
+      const row = (await list(qs)).json.jobs.find((j) => j.id === detail.id);
+      expect(row, qs).toEqual(expected);
+    }
+  });
+
   it("searches by client name, street and job number", async () => {
     actAs(ids.auditor);
     expect((await list("q=Pashley")).json.jobs.map((j) => j.number)).toEqual([1006]);
