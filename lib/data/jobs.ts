@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, desc, eq, inArray, max, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, max, sql, type SQL } from "drizzle-orm";
 import { getDb, type Db } from "@/db";
 import { clients, houses, jobCrew, jobs, jobStageEvents, users, type JobStage } from "@/db/schema";
 import { ApiError, notFound } from "@/lib/api/errors";
@@ -115,9 +115,10 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
     .limit(limit)
     .offset(offset)
     .as("page");
-  return {
-    list: db
-      .select(listFields)
+  /** A page in the list's order, joined, with `extra` as the column after the list's own. */
+  const joinedPage = (extra: SQL<number | null>) =>
+    db
+      .select({ ...listFields, extra })
       .from(jobs)
       .innerJoin(clients, eq(clients.id, jobs.clientId))
       .innerJoin(houses, eq(houses.id, jobs.houseId))
@@ -126,7 +127,9 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
       .orderBy(order, desc(jobs.number))
       .limit(limit)
       .offset(offset)
-      .prepare(),
+      .prepare();
+  return {
+    list: joinedPage(sql<null>`null`),
     /** A page of the matches with, on every row, how many there are in all. */
     listWithTotal: pageFirst
       ? db
@@ -138,29 +141,9 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
           .leftJoin(users, eq(users.id, jobs.auditorId))
           .orderBy(order, desc(jobs.number))
           .prepare()
-      : db
-          .select({ ...listFields, total })
-          .from(jobs)
-          .innerJoin(clients, eq(clients.id, jobs.clientId))
-          .innerJoin(houses, eq(houses.id, jobs.houseId))
-          .leftJoin(users, eq(users.id, jobs.auditorId))
-          .where(where)
-          .orderBy(order, desc(jobs.number))
-          .limit(limit)
-          .offset(offset)
-          .prepare(),
+      : joinedPage(total),
     /** A page with, on every row, the company's word-index count (see companyWordCount), in one statement. */
-    listWithCompanyWordCount: db
-      .select({ ...listFields, total: sql<number>`(select count(*) from job_words where job_words match ${sql.placeholder("scopedTerm")})` })
-      .from(jobs)
-      .innerJoin(clients, eq(clients.id, jobs.clientId))
-      .innerJoin(houses, eq(houses.id, jobs.houseId))
-      .leftJoin(users, eq(users.id, jobs.auditorId))
-      .where(where)
-      .orderBy(order, desc(jobs.number))
-      .limit(limit)
-      .offset(offset)
-      .prepare(),
+    listWithCompanyWordCount: joinedPage(sql<number>`(select count(*) from job_words where job_words match ${sql.placeholder("scopedTerm")})`),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
     // A word search's matches in every company: an upper bound, from the word index alone.
