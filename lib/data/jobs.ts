@@ -40,7 +40,7 @@ type Search = { kind: SearchKind; term?: string };
 function searchPlan(q: string | undefined): Search {
   if (!q) return { kind: "none" };
   const words = q.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
-  if (words.length) return { kind: "words", term: `{body} : (${words.map((w) => `"${w}"*`).join(" ")})` };
+  if (words.length) return { kind: "words", term: words.map((w) => `"${w}"*`).join(" ") };
   return substringPlan(q);
 }
 function substringPlan(q: string): Search {
@@ -49,13 +49,35 @@ function substringPlan(q: string): Search {
 
 function matchesSearch(kind: Exclude<SearchKind, "none">) {
   const term = sql.placeholder("term");
-  if (kind === "words") return sql`${jobs}.rowid in (select rowid from job_words where job_words match ${term})`;
+  const base = sql.placeholder("scopeBase");
+  if (kind === "words") return sql`${jobs}.rowid in (select rowid - ${base} from job_words where job_words match ${term} and rowid between ${base} and ${base} + ${KEY_SPAN - 1})`;
   if (kind === "substring") return sql`${jobs}.rowid in (select rowid from job_search where job_search match ${term})`;
   return sql`${jobs}.rowid in (select rowid from job_search where body like ${term} escape '\\')`;
 }
 
-/** A company's token in the word index's `scope` column (migration 0008). */
-const companyToken = (companyId: string) => `c${companyId.replace(/[^0-9a-z]/gi, "")}`;
+/**
+ * The word index files a job under its company's key times 2^32 plus the job's row id (migration
+ * 0010), so a company's part of the index is one range of row ids, starting at this base.
+ */
+const KEY_SPAN = 4294967296;
+const keyStatements = new WeakMap<Db, ReturnType<typeof buildKeyStatement>>();
+const buildKeyStatement = (db: Db) =>
+  db.select({ key: sql<number>`key` }).from(sql`company_keys`).where(sql`company_id = ${sql.placeholder("companyId")}`).prepare();
+// A company's key never changes once given (company_keys rows are never updated or deleted).
+const companyKeys = new WeakMap<Db, Map<string, number>>();
+async function companyBase(db: Db, companyId: string): Promise<number | null> {
+  let known = companyKeys.get(db);
+  if (!known) companyKeys.set(db, (known = new Map()));
+  let key = known.get(companyId);
+  if (key === undefined) {
+    let st = keyStatements.get(db);
+    if (!st) keyStatements.set(db, (st = buildKeyStatement(db)));
+    const [row] = await st.execute({ companyId });
+    if (!row) return null; // no job yet, so nothing in the index either
+    known.set(companyId, (key = Number(row.key)));
+  }
+  return key * KEY_SPAN;
+}
 
 // The list statements select these columns in this order (listFields in buildListStatements),
 // and some add the matches' total after them. Rows are read by position, as SQLite returns them:
@@ -142,15 +164,16 @@ function buildListStatements(db: Db, role: AuthUser["role"], query: JobListQuery
           .orderBy(order, desc(jobs.number))
           .prepare()
       : joinedPage(total),
-    /** A page with, on every row, the company's word-index count (see companyWordCount), in one statement. */
-    listWithCompanyWordCount: joinedPage(sql<number>`(select count(*) from job_words where job_words match ${sql.placeholder("scopedTerm")})`),
     // Every job has its client and house (foreign keys), so the count needs no joins.
     count: db.select({ total: count() }).from(jobs).where(where).prepare(),
-    // A word search's matches in every company: an upper bound, from the word index alone.
-    wordMatches: db.select({ total: sql<number>`count(*)` }).from(sql`job_words`).where(sql`job_words match ${sql.placeholder("term")}`).prepare(),
-    // A word search's total for roles that see the whole company, from the word index alone: its
-    // `scope` column names each job's company (migration 0008), so no job row is read.
-    companyWordCount: db.select({ total: sql<number>`count(*)` }).from(sql`job_words`).where(sql`job_words match ${sql.placeholder("scopedTerm")}`).prepare(),
+    // A word search's matches in the user's company, from the word index alone (its part of the
+    // index is one range of row ids): the total for a role that sees the whole company, with no
+    // stage filter; for anyone else at least their own count.
+    wordMatches: db
+      .select({ total: sql<number>`count(*)` })
+      .from(sql`job_words`)
+      .where(sql`job_words match ${sql.placeholder("term")} and rowid between ${sql.placeholder("scopeBase")} and ${sql.placeholder("scopeBase")} + ${KEY_SPAN - 1}`)
+      .prepare(),
     // The company-wide total from job_counts (migration 0007), for roles that see the whole company.
     companyTotal: db
       .select({ total: sql<number>`coalesce(sum(${sql.raw("n")}), 0)` })
@@ -182,7 +205,8 @@ export async function listJobs(user: AuthUser, query: JobListQuery): Promise<{ j
 
 async function runList(user: AuthUser, query: JobListQuery, search: Search) {
   const db = getDb();
-  const params = { ...scopeParams(user), stage: query.stage, term: search.term, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+  const scopeBase = search.kind === "words" ? await companyBase(db, user.companyId) : null;
+  const params = { ...scopeParams(user), scopeBase, stage: query.stage, term: search.term, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
   let rows: ArrayLike<unknown>[];
   let total: number;
   if (search.kind === "none") {
@@ -193,43 +217,23 @@ async function runList(user: AuthUser, query: JobListQuery, search: Search) {
     else total = (await st.count.execute(params))[0]!.total;
   } else {
     const fromMatches = listStatements(db, user.role, query, search.kind, "matches");
-    // A word search first asks the word index how many jobs match in every company (cheap, and
-    // at least the user's own count). None: done. Few: one statement pages and counts them.
-    const everywhere = search.kind === "words" ? Number((await fromMatches.wordMatches.execute({ term: search.term }))[0]?.total ?? 0) : undefined;
-    if (everywhere === 0) return { total: 0, jobs: [] };
-    if (everywhere !== undefined && everywhere <= FEW_MATCHES) {
+    // A word search first counts the company's matches in the word index. None: done. Few: one
+    // statement pages them and counts the user's own. Many: the index's count is the total when
+    // the user sees the whole company and no stage is asked for; otherwise the job rows are counted.
+    const inCompany = search.kind === "words" ? Number((await fromMatches.wordMatches.execute(params))[0]?.total ?? 0) : undefined;
+    if (inCompany === 0) return { total: 0, jobs: [] };
+    if (inCompany !== undefined && inCompany <= FEW_MATCHES) {
       rows = await fromMatches.listWithTotal.values(params);
       total = rows.length ? Number(rows[0]![TOTAL]) : query.page === 1 ? 0 : (await fromMatches.count.execute(params))[0]!.total;
-    } else if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
-      // Many matches, and the user sees the whole company: the page, from the company's index in
-      // its order, carries the word index's count of the company's matches.
-      const scopedTerm = `scope : "${companyToken(user.companyId)}" AND ${search.term}`;
-      rows = await listStatements(db, user.role, query, search.kind, "index").listWithCompanyWordCount.values({ ...params, scopedTerm });
-      total = rows.length ? Number(rows[0]![TOTAL]) : await countMatches(fromMatches, user, query, search, params);
     } else {
-      // Count the matches first; then list from wherever is cheaper.
-      total = await countMatches(fromMatches, user, query, search, params);
-      if (total === 0) rows = [];
-      else rows = await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.values(params);
+      total = inCompany !== undefined && !query.stage && seesWholeCompany(user.role) ? inCompany : (await fromMatches.count.execute(params))[0]!.total;
+      rows = total === 0 ? [] : await (total <= FEW_MATCHES ? fromMatches : listStatements(db, user.role, query, search.kind, "index")).list.values(params);
     }
   }
   return {
     total,
     jobs: rows.map(listRow),
   };
-}
-
-/**
- * How many of the user's jobs a search matches, when the word index found many or the search is
- * not by words. A word search by a role that sees the whole company, with no stage, counts inside
- * the word index through its scope tokens (migration 0008) without reading a job row; any other
- * search counts its matching job rows.
- */
-async function countMatches(st: ReturnType<typeof buildListStatements>, user: AuthUser, query: JobListQuery, search: Search, params: Record<string, unknown>) {
-  if (search.kind === "words" && !query.stage && seesWholeCompany(user.role)) {
-    return Number((await st.companyWordCount.execute({ scopedTerm: `scope : "${companyToken(user.companyId)}" AND ${search.term}` }))[0]?.total ?? 0);
-  }
-  return (await st.count.execute(params))[0]!.total;
 }
 
 export async function getJob(user: AuthUser, id: string) {

@@ -1,5 +1,5 @@
 // job_counts (migration 0007) must always equal count(*) of jobs per company and stage, and the
-// word index's scope column (migration 0008) must name each job's company: checked after inserts,
+// word index must file each job in its company's range of row ids (migrations 0008, 0010): checked after inserts,
 // stage changes, a move to another company, renames and deletes, in random orders.
 import { eq, sql } from "drizzle-orm";
 import fc from "fast-check";
@@ -18,16 +18,20 @@ beforeAll(async () => {
 });
 afterAll(() => t.cleanup());
 
-const token = (companyId: string) => `c${companyId.replace(/-/g, "")}`;
-
-/** Per company: the jobs the word index files under its scope token, and the jobs it really has. */
+/** Per company: the jobs the word index files in the company's range of row ids (migration 0010), and the jobs it really has. */
 async function scopes() {
   const out: { company: string; indexed: number[]; real: number[] }[] = [];
   for (const company of [demoCompanyId, other]) {
-    const indexed = await t.db.all<{ rowid: number }>(sql`select rowid from job_words where job_words match ${`scope : "${token(company)}"`} order by rowid`);
+    const [key] = await t.db.all<{ key: number }>(sql`select key from company_keys where company_id = ${company}`);
+    const base = (key?.key ?? -1) * 2 ** 32;
+    const indexed = await t.db.all<{ rowid: number }>(sql`select rowid - ${base} as rowid from job_words where rowid between ${base} and ${base + 2 ** 32 - 1} order by rowid`);
     const real = await t.db.all<{ rowid: number }>(sql`select rowid from jobs where company_id = ${company} order by rowid`);
     out.push({ company, indexed: indexed.map((r) => r.rowid), real: real.map((r) => r.rowid) });
   }
+  // and nothing outside any company's range
+  const [{ n }] = await t.db.all<{ n: number }>(sql`select count(*) as n from job_words`);
+  const [{ m }] = await t.db.all<{ m: number }>(sql`select count(*) as m from jobs`);
+  expect(n).toBe(m);
   return out;
 }
 
