@@ -28,7 +28,7 @@ const sortColumns = {
 
 /**
  * How a search is run. Both indexes hold the job number, title, client name, street and town and
- * are kept by triggers (migrations 0001, 0006 and 0008):
+ * are kept by triggers (migrations 0001, 0006 and 0009):
  * - "words": every word typed is the beginning of a word of the job's text (`job_words`, column
  *   `body`; reads only the matching words' entries: "birch 12" finds 12 Birchwood Road);
  * - "substring": the text anywhere (`job_search`, trigrams), tried when words find nothing;
@@ -57,7 +57,7 @@ function matchesSearch(kind: Exclude<SearchKind, "none">) {
 
 /**
  * The word index files a job under its company's key times 2^32 plus the job's row id (migration
- * 0010), so a company's part of the index is one range of row ids, starting at this base.
+ * 0009), so a company's part of the index is one range of row ids, starting at this base.
  */
 const KEY_SPAN = 4294967296;
 const keyStatements = new WeakMap<Db, ReturnType<typeof buildKeyStatement>>();

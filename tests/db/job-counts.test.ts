@@ -1,5 +1,5 @@
 // job_counts (migration 0007) must always equal count(*) of jobs per company and stage, and the
-// word index must file each job in its company's range of row ids (migrations 0008, 0010): checked after inserts,
+// word index must file each job in its company's range of row ids (migration 0009): checked after inserts,
 // stage changes, a move to another company, renames and deletes, in random orders.
 import { eq, sql } from "drizzle-orm";
 import fc from "fast-check";
@@ -18,7 +18,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.cleanup());
 
-/** Per company: the jobs the word index files in the company's range of row ids (migration 0010), and the jobs it really has. */
+/** Per company: the jobs the word index files in the company's range of row ids (migration 0009), and the jobs it really has. */
 async function scopes() {
   const out: { company: string; indexed: number[]; real: number[] }[] = [];
   for (const company of [demoCompanyId, other]) {

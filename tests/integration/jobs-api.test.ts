@@ -74,7 +74,7 @@ describe("GET /api/jobs", () => {
     expect(await numbers("ansyfie")).toEqual([1006]); // inside a word: no word begins so, the trigram index finds it
     expect(await numbers("tansy nowhere")).toEqual([]); // a word that matches nothing rules the job out
     expect(await numbers('"')).toEqual([]); // punctuation alone is not a syntax error
-    // the index's company tokens (migration 0008) are not words of any job
+    // no company id is ever a word of a job (the index files companies by row id, migration 0009)
     expect(await numbers(`c${demoCompanyId.replace(/-/g, "")}`)).toEqual([]);
     expect(await numbers(`c${demoCompanyId.slice(0, 3)}`)).toEqual([]);
   });

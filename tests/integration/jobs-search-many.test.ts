@@ -1,5 +1,5 @@
 // A search that matches many jobs (more than FEW_MATCHES in lib/data/jobs.ts) is counted inside the
-// word index through its company scope tokens (migration 0008) and listed from the company index;
+// word index within its company's range of row ids (migration 0009) and listed from the company index;
 // one that matches few is counted and listed from its matches. Both must give each company exactly
 // its own jobs, for every role, with a stage filter and across pages.
 import { describe, expect, it, vi } from "vitest";
